@@ -19,9 +19,17 @@ namespace TermLocus.Core.Time;
 /// transform; each value is det(z − Φ)·C·(zI − Φ)⁻¹·Γ from one complex LU solve. Coefficients come out with an
 /// absolute error of a few ulps times (1 + max|e^{pᵢT}|)^{n−1} relative to the largest numerator coefficient
 /// (about 1e-13 for the textbook cases in the tests).
+/// <para>Limit of the polynomial form: when the sample time is short beside the loop's time constants, all poles
+/// crowd near z = 1 and the coefficients of a polynomial in z can no longer hold them: near z = 1 (the DC gain,
+/// the slow modes, the step response) about 1e-16·2ⁿ/Π|pᵢT| of relative accuracy is left, whatever the method
+/// (see <see cref="AccuracyEstimate"/>). Two poles at |p|T = 1e-3 keep about 10 digits, five at 1e-2 about 7,
+/// eight at 1e-3 none.</para>
 /// </summary>
 public static class ZeroOrderHold
 {
+    private const double UnitRoundoff = 1.1e-16;
+    private const double OriginTolerance = 1e-8;
+
     /// <summary>
     /// G(z) for the proper <paramref name="g"/> (rational in s) held over <paramref name="sampleTimeSeconds"/>
     /// (finite, &gt; 0), as a rational function of z with a monic denominator of the same degree as g's.
@@ -66,6 +74,37 @@ public static class ZeroOrderHold
         var num = InterpolateNumerator(system.C, hold, den, radius) + (system.D * den);
         result = new RationalFunction(num, den);
         return true;
+    }
+
+    /// <summary>
+    /// An estimate of the relative accuracy left near z = 1 in G(z) = <see cref="Discretise"/>(g, T) by the
+    /// polynomial form itself: 1.1e-16·2ⁿ / Π|pᵢT| over the poles pᵢ of g, skipping poles at the origin (below
+    /// 1e-8 of the largest modulus), which z = 1 represents exactly. Measured step-response errors in the tests
+    /// lie 3 to 30 times below it. Values near or above 1e-3 mean the sample time is too short for this loop's
+    /// order to be handled as a ratio of polynomials in z. T in seconds, finite, &gt; 0.
+    /// </summary>
+    public static double AccuracyEstimate(RationalFunction g, double sampleTimeSeconds)
+    {
+        ArgumentNullException.ThrowIfNull(g);
+        if (!double.IsFinite(sampleTimeSeconds) || sampleTimeSeconds <= 0.0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(sampleTimeSeconds), sampleTimeSeconds, "Must be finite, > 0.");
+        }
+
+        if (g.Denominator.Degree < 1)
+        {
+            return UnitRoundoff;
+        }
+
+        var moduli = PolynomialRoots.Find(g.Denominator).Select(Complex.Abs).ToArray();
+        double floor = OriginTolerance * moduli.Max();
+        double estimate = UnitRoundoff * Math.Pow(2.0, moduli.Length);
+        foreach (double m in moduli.Where(m => m > floor))
+        {
+            estimate /= m * sampleTimeSeconds;
+        }
+
+        return estimate;
     }
 
     private static Polynomial InterpolateNumerator(RealVector c, HoldDiscretisation hold, Polynomial den, double radius)

@@ -82,6 +82,30 @@ public class ZeroOrderHoldTests
         }
     }
 
+    [Theory]
+    [InlineData(2, 1e-3)]
+    [InlineData(3, 1e-3)]
+    [InlineData(3, 1e-2)]
+    [InlineData(5, 1e-2)]
+    [InlineData(5, 1e-3)]
+    public void Documented_accuracy_estimate_bounds_the_step_invariance_error(int order, double t)
+    {
+        // Π (s + i), i = 1..order, unit DC gain; the continuous response is exact, so any difference from the
+        // equivalent's response is the z-polynomial form's error (step invariance: definition of the hold).
+        var den = Polynomial.One;
+        for (int i = 1; i <= order; i++)
+        {
+            den *= Polynomial.FromAscending(i, 1);
+        }
+
+        var g = new RationalFunction(Polynomial.Constant(den[0]), den);
+        int samples = (int)(8.0 / t);
+        var sampled = StepResponse.SimulateSampled(ZeroOrderHold.Discretise(g, t), t, samples);
+        var continuous = StepResponse.Simulate(g, t * (samples - 1), samples);
+        double worst = sampled.Outputs.Zip(continuous.Outputs, (a, b) => Math.Abs(a - b)).Max();
+        Assert.InRange(worst, 0.0, ZeroOrderHold.AccuracyEstimate(g, t));
+    }
+
     [Fact]
     public void Poles_map_by_the_exponential_and_feed_through_survives()
     {
