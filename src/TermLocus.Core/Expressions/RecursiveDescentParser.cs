@@ -187,7 +187,7 @@ internal sealed class RecursiveDescentParser
                 position++;
                 var inner = ParseSum();
                 ExpectClose(token);
-                return inner;
+                return inner with { Start = token.Offset, End = Previous.End };
             default:
                 throw ExpectedOperand(token);
         }
