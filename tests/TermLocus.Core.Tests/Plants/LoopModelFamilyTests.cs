@@ -40,6 +40,39 @@ public class LoopModelFamilyTests
     }
 
     [Fact]
+    public void An_inertia_written_as_one_over_J_is_affine_once_the_common_power_of_J_is_divided_out()
+    {
+        // (1/J)/(s(s + B/J)) with C = Kp forms J·(J s^2 + B s + Kp) (nothing cancelled); divided by J it is
+        // affine with A = B s + Kp, B = s^2 (by hand), and has the same roots as the characteristic for J != 0.
+        var model = Model([("J", 2.0), ("B", 0.5), ("Kp", 3.0)], plant: "(1/J)/(s*(s + B/J))", controller: "Kp");
+        var family = model.Family("J", Values());
+        AssertCoefficients([3.0, 0.5], family.Affine!.A, Tol);
+        AssertCoefficients([0.0, 0.0, 1.0], family.Affine!.B, Tol);
+        foreach (double j in new[] { -1.5, 0.25, 4.0 })
+        {
+            var direct = model.Characteristic(Values(("J", j)));
+            var viaFamily = family.At(j).Scale(j);
+            for (int k = 0; k <= direct.Degree; k++)
+            {
+                Assert.Equal(direct[k], viaFamily[k], 1e-12);
+            }
+        }
+
+        // At J = 0 the divided-out family still has a meaning: B s + Kp, the degree drops.
+        AssertCoefficients([3.0, 0.5], family.At(0.0), Tol);
+    }
+
+    [Fact]
+    public void A_monic_given_characteristic_with_the_parameter_in_denominators_is_affine()
+    {
+        // s^2 + (B/J) s + K/J: numerator J^2 s^2 + B J s + K J, divided by J: J s^2 + B s + K.
+        var model = Model([("J", 2.0), ("B", 0.5), ("K", 3.0)], plant: null, characteristic: "s^2 + (B/J)*s + K/J");
+        var split = model.Family("J", Values()).Affine!;
+        AssertCoefficients([3.0, 0.5], split.A, Tol);
+        AssertCoefficients([0.0, 0.0, 1.0], split.B, Tol);
+    }
+
+    [Fact]
     public void Every_parameter_of_the_spindle_example_enters_affinely()
     {
         // Invented example of the plant-file design: P = s(J s + B)(tau s + 1) + Kc·Kt·(s + 20) is of first degree
