@@ -141,6 +141,22 @@ public class ExpressionParserErrorTests
         Assert.Equal(new SourcePosition(1, column), e.Position);
     }
 
+    [Theory]
+    [InlineData("K*ln(-1)", 3, "'ln(-1)' is not a real number")]
+    [InlineData("K/0", 3, "division by zero: '0' is 0")]
+    [InlineData("s/(2-2)", 3, "division by zero: '(2-2)' is 0")]
+    [InlineData("K^(1/0)", 6, "division by zero")]
+    [InlineData("(1e200*1e200)*s", 1, "too large")]
+    [InlineData("1/0", 3, "division by zero")]
+    [InlineData("K*0^-1", 3, "division by zero")]
+    public void Constant_parts_without_a_finite_value_are_refused_when_parsed(string text, int column, string fragment)
+    {
+        // Reported at load time, before any parameter value is known.
+        var e = ParseError(text);
+        Assert.Contains(fragment, e.Message, StringComparison.Ordinal);
+        Assert.Equal(new SourcePosition(1, column), e.Position);
+    }
+
     [Fact]
     public void A_missing_value_is_reported_at_the_first_use_of_the_name()
     {

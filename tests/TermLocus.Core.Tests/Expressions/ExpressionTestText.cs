@@ -28,10 +28,14 @@ internal static class ExpressionTestText
     public static PlantFileError ParseError(string text, string variable = "s") =>
         Assert.Throws<PlantFileException>(() => Parse(text, variable)).Error;
 
-    /// <summary>The error that evaluating <paramref name="text"/> gives (it must parse).</summary>
+    /// <summary>The error that parsing (for constant parts) or else evaluating <paramref name="text"/> gives.</summary>
     public static PlantFileError EvalError(string text, params (string Name, double Value)[] values)
     {
-        var parsed = Parse(text);
+        if (!ExpressionParser.TryParse(ExpressionText.Inline("plant", text), FileName, out var parsed, out var parseError))
+        {
+            return parseError;
+        }
+
         Assert.False(parsed.TryEvaluate(values.ToDictionary(v => v.Name, v => v.Value), out _, out var error));
         return error;
     }
