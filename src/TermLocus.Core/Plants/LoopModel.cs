@@ -101,6 +101,10 @@ public sealed class LoopModel
     /// at <paramref name="values"/>. Affine (<see cref="CharacteristicFamily.Affine"/> set, P = A + p·B) exactly when
     /// evaluating with p kept symbolic gives coefficients of degree one in p; otherwise (p squared, in two factors,
     /// under a function, or not entering at all) a numeric family that re-forms the loop for each p.
+    /// Before the check, a power p^m dividing the whole polynomial (which a parameter under a fraction bar brings,
+    /// e.g. <c>(1/J)/(s*(s + B/J))</c> gives J·(J s^2 + B s + K)) is divided out: the affine family's
+    /// <c>At(p)</c> is then <see cref="Characteristic"/> / p^m, with the same roots for every p != 0 and a
+    /// meaningful limit at p = 0. A numeric family's <c>At(p)</c> equals <see cref="Characteristic"/>.
     /// </summary>
     /// <exception cref="ArgumentException"><paramref name="sweptName"/> is not a parameter.</exception>
     /// <exception cref="PlantFileException">A part free of p cannot be formed at these values. The family's

@@ -72,10 +72,17 @@ internal sealed class LoopParts
         return new RationalFunction(f[0].Numerator * f[1].Numerator * f[2].Denominator, FromLoopGain(gain));
     }
 
-    /// <summary>The exact affine split in the parameter at <paramref name="swept"/>, or null when P is not affine in it.</summary>
+    /// <summary>
+    /// The exact affine split in the parameter at <paramref name="swept"/> of P divided by the highest power of p
+    /// that divides it, or null when that is not affine in p.
+    /// </summary>
     public AffineSplit? AffineSplit(double[] slots, int swept)
     {
         BivariatePolynomial? p = given is not null ? given.EvaluateSwept(slots, swept)?.Numerator : SweptCharacteristic(slots, swept);
+
+        // A parameter under a fraction bar multiplies the whole polynomial by a power of itself, e.g. 1/J gives
+        // J·(J s^2 + B s + K): dividing it out changes no root for p != 0 and lets such loops count as affine.
+        p = p?.DivideByPowerOfP(p.CommonPowerOfP());
         return p is { DegreeInP: 1 } ? new AffineSplit(p.CoefficientOfP(0), p.CoefficientOfP(1)) : null;
     }
 
