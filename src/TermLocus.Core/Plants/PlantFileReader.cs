@@ -117,12 +117,19 @@ public static class PlantFileReader
             throw context.Fail(new SourcePosition(1, 1), "the TOML parser failed: " + PlantTextSafety.Visible(e.Message, 200));
         }
 
+        // Tomlyn lists parser errors before lexer errors; the earliest one in the file is the one to fix first.
+        DiagnosticMessage? first = null;
         foreach (var diagnostic in document.Diagnostics)
         {
-            if (diagnostic.Kind == DiagnosticMessageKind.Error)
+            if (diagnostic.Kind == DiagnosticMessageKind.Error && (first is null || diagnostic.Span.Start.Offset < first.Span.Start.Offset))
             {
-                throw context.Fail(context.Map.PositionAt(diagnostic.Span.Start.Offset), SyntaxMessage(diagnostic.Message));
+                first = diagnostic;
             }
+        }
+
+        if (first is not null)
+        {
+            throw context.Fail(context.Map.PositionAt(first.Span.Start.Offset), SyntaxMessage(first.Message));
         }
 
         return document;
