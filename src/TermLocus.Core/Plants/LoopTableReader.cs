@@ -17,12 +17,7 @@ internal static class LoopTableReader
         var feedback = ReadFeedback(context, items.Find("feedback"));
         var sweepItem = items.Find("sweep") ?? throw context.Fail(table, "[loop] needs 'sweep', the parameter the locus is traced over");
         var sweep = TomlValues.Text(context, sweepItem, "sweep");
-        var swept = FindNamed(context, sweepItem, sweep, parameters, "sweep");
-        if (swept.Range is null)
-        {
-            throw context.Fail(sweepItem.Value!, $"the swept parameter '{sweep}' needs range = [low, high] in [parameters]");
-        }
-
+        _ = FindNamed(context, sweepItem, sweep, parameters, "sweep");
         var vary = ReadVary(context, items.Find("vary"), sweep, parameters);
         var delay = items.Find("delay") is { } d ? Limited(context, d, "delay", x => x >= 0, "0 or more seconds") : (double?)null;
         var sample = items.Find("sample_time") is { } t ? Limited(context, t, "sample_time", x => x > 0, "more than 0 seconds") : (double?)null;

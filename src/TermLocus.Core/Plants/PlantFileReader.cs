@@ -84,6 +84,13 @@ public static class PlantFileReader
             throw context.Fail(context.Map.PositionAt(nul), "NUL character (U+0000) in the file");
         }
 
+        var replacement = text.IndexOf('\uFFFD', StringComparison.Ordinal);
+        if (replacement >= 0)
+        {
+            // Tomlyn takes U+FFFD for a decoding failure and reports a misleading surrogate error.
+            throw context.Fail(context.Map.PositionAt(replacement), "the replacement character U+FFFD cannot be read; inside a string write it as \\uFFFD");
+        }
+
         var plant = Build(context, ParseSyntax(context, validate: false));
 
         // Tomlyn's own validation is a second net for TOML rules our walk does not model.

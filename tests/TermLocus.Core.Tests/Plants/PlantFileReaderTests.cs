@@ -114,6 +114,19 @@ public sealed class PlantFileReaderTests
         Assert.Equal(0.001, loop.SampleTimeSeconds!.Value, Exact);
     }
 
+    // The default span is our own documented rule (Plant.SweepRange), not a textbook value.
+    [Theory]
+    [InlineData("K = 2", 0, 4)]
+    [InlineData("K = -3", -6, 0)]
+    [InlineData("K = 0", 0, 1)]
+    [InlineData("K = { value = 2, range = [1, 9] }", 1, 9)]
+    public void The_sweep_range_is_the_files_range_or_zero_to_twice_the_value(string parameter, double low, double high)
+    {
+        var plant = PlantFileReader.Parse($"[parameters]\n{parameter}\n[loop]\nplant = \"K/s\"\nsweep = \"K\"\n", "x.toml");
+
+        Assert.Equal(new Interval(low, high), plant.SweepRange);
+    }
+
     [Fact]
     public void A_leading_byte_order_mark_is_ignored_and_does_not_shift_columns()
     {
