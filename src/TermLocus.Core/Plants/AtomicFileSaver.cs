@@ -80,6 +80,10 @@ public static class AtomicFileSaver
                 failure = new(SaveOutcome.Missing, target, $"{path} no longer exists; save under another name");
             }
         }
+        catch (Exception e) when (e is FileNotFoundException or DirectoryNotFoundException)
+        {
+            failure = new(SaveOutcome.Missing, target, $"{path} no longer exists (or links to nothing); save under another name");
+        }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
         {
             failure = new(SaveOutcome.Failed, target, $"cannot find the file behind {path}: {PlantTextSafety.Visible(e.Message, 200)}");
