@@ -91,11 +91,9 @@ public static class PlantFileReader
             throw context.Fail(context.Map.PositionAt(replacement), "the replacement character U+FFFD cannot be read; inside a string write it as \\uFFFD");
         }
 
-        var plant = Build(context, ParseSyntax(context, validate: false));
-
-        // Tomlyn's own validation is a second net for TOML rules our walk does not model.
-        ParseSyntax(context, validate: true);
-        return plant;
+        // Tomlyn's validation pass is not run: the walk checks every rule it would (duplicate keys and tables, a
+        // table given twice under two spellings) with better messages, and it would double the parse time.
+        return Build(context, ParseSyntax(context));
     }
 
     private static Plant Build(PlantSyntaxContext context, DocumentSyntax document)
@@ -112,12 +110,12 @@ public static class PlantFileReader
         return new Plant(context.Path, title, note, parameters, loop, specs, points);
     }
 
-    private static DocumentSyntax ParseSyntax(PlantSyntaxContext context, bool validate)
+    private static DocumentSyntax ParseSyntax(PlantSyntaxContext context)
     {
         DocumentSyntax document;
         try
         {
-            document = SyntaxParser.Parse(context.Text, context.Path, validate);
+            document = SyntaxParser.Parse(context.Text, context.Path, validate: false);
         }
         catch (Exception e) when (e is not PlantFileException and not OutOfMemoryException)
         {

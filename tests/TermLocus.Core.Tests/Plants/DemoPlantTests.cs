@@ -44,6 +44,17 @@ public sealed class DemoPlantTests
         Assert.Contains(plant.Parameters, p => p.Note.Length > 0);
     }
 
+    // The reader skips Tomlyn's own validation pass; Tomlyn (an independent TOML implementation) must agree that
+    // every file the reader accepts is valid TOML.
+    [Theory]
+    [MemberData(nameof(DemoFiles))]
+    public void Tomlyn_validation_agrees_that_each_demo_plant_is_valid_toml(string name)
+    {
+        var document = Tomlyn.Parsing.SyntaxParser.Parse(File.ReadAllText(Path.Combine(Folder, name)), name, validate: true);
+
+        Assert.False(document.HasErrors, document.Diagnostics.ToString());
+    }
+
     [Fact]
     public void The_library_covers_a_given_characteristic_and_a_swept_physical_coefficient()
     {
