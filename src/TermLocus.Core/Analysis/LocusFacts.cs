@@ -17,7 +17,8 @@ namespace TermLocus.Core.Analysis;
 /// <param name="Asymptotes">One set per sign of p in the range, positive first; empty when n &lt;= m or not affine.</param>
 /// <param name="BreakPoints">Break points with p in the range, by p.</param>
 /// <param name="AxisCrossings">Imaginary-axis crossings with p in the range, by p then ω. Open-loop poles on the
-/// axis (p = 0) appear only when 0 lies strictly inside the range.</param>
+/// axis (p = 0) appear only when 0 lies strictly inside the range; for families that are not affine, poles on the
+/// axis exactly at an end of the range are not listed.</param>
 /// <param name="DepartureAngles">Departure directions at complex open-loop poles, for each sign of p in the range.</param>
 /// <param name="ArrivalAngles">Arrival directions at complex open-loop zeros, for each sign of p in the range.</param>
 /// <param name="StableIntervals">Sub-ranges where every pole is in the open left half-plane, ascending; several for a
@@ -82,7 +83,9 @@ public sealed record LocusFacts(
     {
         var trace = LocusTracer.Trace(family, from, to, options);
         var crossings = TraceCrossingFinder.Find(family, trace, s => -s.Real);
+        // A pole sitting on the axis exactly at an end of the range cannot be seen to cross from inside it.
         var axis = crossings
+            .Where(c => !LocusRange.AtEnd(from, to, c.Value))
             .Select(c => new AxisCrossing(
                 Math.Abs(c.Pole.Imaginary),
                 c.Value,
