@@ -23,6 +23,8 @@ namespace TermLocus.App.Text;
 /// <param name="Right">Right arrow key name.</param>
 /// <param name="Up">Up arrow key name.</param>
 /// <param name="Down">Down arrow key name.</param>
+/// <param name="AtLeast">"not below" relation.</param>
+/// <param name="AtMost">"not above" relation.</param>
 public sealed record Glyphs(
     string Zeta,
     string NaturalFrequency,
@@ -42,13 +44,15 @@ public sealed record Glyphs(
     string Left,
     string Right,
     string Up,
-    string Down)
+    string Down,
+    string AtLeast,
+    string AtMost)
 {
     /// <summary>Symbols for a UTF-8 terminal.</summary>
     public static Glyphs Unicode { get; } = new(
-        "ζ", "ωn", "σ", "t½", "t×2", "ωd", "±", "j", "✓", "!", "▸", "…", "─", "·", "●", "←", "→", "↑", "↓");
+        "ζ", "ωn", "σ", "t½", "t×2", "ωd", "±", "j", "✓", "!", "▸", "…", "─", "·", "●", "←", "→", "↑", "↓", "≥", "≤");
 
     /// <summary>Symbols for a terminal without UTF-8.</summary>
     public static Glyphs Ascii { get; } = new(
-        "zeta", "wn", "sigma", "t1/2", "t*2", "wd", "+/-", "j", "ok", "!", ">", "~", "-", ".", "#", "Left", "Right", "Up", "Down");
+        "zeta", "wn", "sigma", "t1/2", "t*2", "wd", "+/-", "j", "ok", "!", ">", "~", "-", ".", "#", "Left", "Right", "Up", "Down", ">=", "<=");
 }

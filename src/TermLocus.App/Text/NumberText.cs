@@ -59,6 +59,21 @@ public static class NumberText
     public static string Exact(double value) =>
         StripNegativeZero(value.ToString("R", CultureInfo.InvariantCulture));
 
+    /// <summary>
+    /// <paramref name="value"/> rounded to <paramref name="digits"/> significant digits and spelt as briefly as it
+    /// reads back (12, 2.414214, 4.7E-06), for solved values where the trailing digits are noise.
+    /// </summary>
+    public static string Short(double value, int digits = 7)
+    {
+        if (value == 0.0 || !double.IsFinite(value))
+        {
+            return Exact(value);
+        }
+
+        string rounded = value.ToString("G" + digits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        return Exact(double.Parse(rounded, NumberStyles.Float, CultureInfo.InvariantCulture));
+    }
+
     /// <summary>Parses a number typed by a user (invariant culture, exponent allowed); false for anything else.</summary>
     public static bool TryParse(string text, out double value) =>
         double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out value) && double.IsFinite(value);

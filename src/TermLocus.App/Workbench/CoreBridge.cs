@@ -37,4 +37,10 @@ internal static class CoreBridge
     // PENDING(locus): LocusTracer.Trace + LocusFacts + SpecBoundaries.
     public static LocusAnalysis Trace(LoadedPlant loaded, TraceKey key) =>
         throw new NotSupportedException($"tracing arrives with the locus engine ({loaded.Plant.Path}, {key.OtherValues})");
+
+    // PENDING(plantfile): OperatingPointWriter + AtomicFileSaver. Writes to targetPath (the plant file itself, or the
+    // recovery file beside it) and returns the plant as now saved.
+    public static Core.Plants.Plant SaveOperatingPoint(
+        Core.Plants.Plant plant, double value, string verdict, SaveContext context, string targetPath) =>
+        throw new NotSupportedException($"saving arrives with the plant-file writer ({targetPath}, {value}, {verdict}, {context.By}, {plant.Path})");
 }

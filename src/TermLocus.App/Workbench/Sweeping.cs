@@ -87,7 +87,7 @@ internal static class Sweeping
         }
 
         return SetValue(s, mark.Value, StatusMessage.Info(
-            $"{SpecWording.DescribeMark(mark)} at {session.Sweep.Name} = {NumberText.Significant(mark.Value, 7)}"));
+            $"{SpecWording.DescribeMark(mark)} at {session.Sweep.Name} = {NumberText.Short(mark.Value)}"));
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Revert(WorkbenchState s)
