@@ -17,7 +17,7 @@ public static class HelpPresenter
         "commissioning procedure on the real hardware, for local codes and regulations, or for licensed engineering " +
         "practice. Step gains on live equipment only with limits, guards and an emergency stop in place.";
 
-    private const int KeyColumn = 18;
+    private const int KeyColumn = 20;
 
     /// <summary>The scopes in the order help lists them.</summary>
     public static ImmutableArray<Scope> ScopeOrder { get; } =
@@ -40,7 +40,7 @@ public static class HelpPresenter
             {
                 var bindings = KeyMap.Bindings.Where(b => b.Scope == scope && b.Command == command).ToList();
                 string keys = string.Join("  ", bindings.Select(b => b.Key.Name(glyphs)));
-                lines.Add("  " + TextWidth.PadRight(keys, KeyColumn - 2) + bindings[0].Description);
+                lines.Add("  " + TextWidth.PadRight(keys, Math.Max(KeyColumn - 2, TextWidth.Of(keys) + 2)) + bindings[0].Description);
             }
         }
 

@@ -68,9 +68,9 @@ public static class KeyHints
     private static readonly ImmutableArray<Hint> MainHints =
     [
         new([Command.StepSweepDown, Command.StepSweepUp], "step", 2),
-        new([Command.FinerStep, Command.CoarserStep], "step size", 5),
+        new([Command.FinerStep, Command.CoarserStep], "step size", 6),
         new([Command.EnterValue], "value", 3),
-        new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 6),
+        new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 5),
         new([Command.ZoomIn, Command.ZoomOut], "zoom", 7),
         new([Command.FitView], "fit", 8),
         new([Command.NextPane], "pane", 9),

@@ -55,7 +55,7 @@ public static class LibraryPresenter
             ? SafeText.Visible(item.Problem ?? "could not be read")
             : SafeText.Visible(item.Title ?? string.Empty);
         string mark = selected ? g.Selected : " ";
-        string openMark = open ? "*" : " ";
-        return $"{mark}{openMark}{TextWidth.PadRight(verdict, VerdictWidth + 2)} {name}  {detail}";
+        string openNote = open ? "  (open)" : string.Empty;
+        return $"{mark} {TextWidth.PadRight(verdict, VerdictWidth + 2)} {name}  {detail}{openNote}";
     }
 }

@@ -13,8 +13,8 @@ namespace TermLocus.App.Workbench;
 /// </summary>
 public static class PoleTablePresenter
 {
-    private const int MarkWidth = 2;
-    private const int LocationWidth = 19;
+    private const int MarkWidth = 3;
+    private const int MinimumLocationWidth = 12;
     private const int NumberWidth = 9;
     private const int MinimumSpecWidth = 10;
 
@@ -30,13 +30,14 @@ public static class PoleTablePresenter
     public static ImmutableArray<string> Lines(PoleSnapshot poles, int? selected, int width, int height, Glyphs glyphs)
     {
         var rows = PoleRows.Group(poles.Poles);
-        var columns = ColumnsFor(width, glyphs);
+        int locationWidth = Math.Max(MinimumLocationWidth, rows.IsEmpty ? 0 : rows.Max(r => TextWidth.Of(SpecWording.Location(r.Pole, glyphs))) + 1);
+        var columns = ColumnsFor(width, locationWidth);
         var lines = ImmutableArray.CreateBuilder<string>();
-        lines.Add(Header(columns, glyphs));
+        lines.Add(Header(columns, locationWidth, glyphs));
         if (rows.IsEmpty)
         {
             lines.Add("  no closed-loop poles (the characteristic polynomial is constant)");
-            return Finish(lines, width, height);
+            return Finish(lines, width, height, glyphs);
         }
 
         int room = Math.Max(1, height - 1);
@@ -45,7 +46,7 @@ public static class PoleTablePresenter
         int first = fits ? 0 : Math.Clamp((selected ?? 0) - visible + 1, 0, rows.Length - visible);
         for (int i = first; i < first + visible; i++)
         {
-            lines.Add(Row(rows[i], poles, columns, i == selected, glyphs));
+            lines.Add(Row(rows[i], poles, columns, locationWidth, i == selected, glyphs));
         }
 
         if (!fits)
@@ -53,14 +54,14 @@ public static class PoleTablePresenter
             lines.Add($"  {rows.Length - visible} more (Tab, then {glyphs.Up}/{glyphs.Down})");
         }
 
-        return Finish(lines, width, height);
+        return Finish(lines, width, height, glyphs);
     }
 
     /// <summary>The figure columns that fit in <paramref name="width"/>, in order, leaving room for the spec words.</summary>
-    internal static ImmutableArray<PoleColumn> ColumnsFor(int width, Glyphs glyphs)
+    internal static ImmutableArray<PoleColumn> ColumnsFor(int width, int locationWidth)
     {
         PoleColumn[] all = [PoleColumn.Damping, PoleColumn.NaturalFrequency, PoleColumn.DecayRate, PoleColumn.Time, PoleColumn.DampedFrequency];
-        int used = MarkWidth + LocationWidth + MinimumSpecWidth;
+        int used = MarkWidth + locationWidth + MinimumSpecWidth;
         var chosen = ImmutableArray.CreateBuilder<PoleColumn>();
         foreach (var column in all)
         {
@@ -73,14 +74,13 @@ public static class PoleTablePresenter
             used += NumberWidth;
         }
 
-        _ = glyphs;
         return chosen.ToImmutable();
     }
 
-    private static string Header(ImmutableArray<PoleColumn> columns, Glyphs g)
+    private static string Header(ImmutableArray<PoleColumn> columns, int locationWidth, Glyphs g)
     {
         var sb = new StringBuilder(new string(' ', MarkWidth));
-        sb.Append(TextWidth.PadRight("pole", LocationWidth));
+        sb.Append(TextWidth.PadRight("pole", locationWidth));
         foreach (var column in columns)
         {
             string title = column switch
@@ -91,22 +91,28 @@ public static class PoleTablePresenter
                 PoleColumn.Time => g.TimeToHalf + " s",
                 PoleColumn.DampedFrequency => g.DampedFrequency + " rad/s",
             };
-            sb.Append(TextWidth.PadLeft(title, NumberWidth - 1)).Append(' ');
+            sb.Append(TextWidth.PadLeft(Shorten(title), NumberWidth - 1)).Append(' ');
         }
 
         return sb.Append(" spec").ToString();
     }
 
-    private static string Row(PoleRow row, PoleSnapshot poles, ImmutableArray<PoleColumn> columns, bool isSelected, Glyphs g)
+    // A title too long for its column loses its unit rather than being cut mid-word.
+    private static string Shorten(string title) =>
+        TextWidth.Of(title) <= NumberWidth - 1 || !title.Contains(' ', StringComparison.Ordinal)
+            ? title
+            : title[..title.IndexOf(' ', StringComparison.Ordinal)];
+
+    private static string Row(PoleRow row, PoleSnapshot poles, ImmutableArray<PoleColumn> columns, int locationWidth, bool isSelected, Glyphs g)
     {
         var problems = Problems(row, poles, g);
         var sb = new StringBuilder();
         sb.Append(isSelected ? g.Selected : " ");
-        sb.Append(problems.Count > 0 ? g.Violated : " ");
-        sb.Append(TextWidth.PadRight(SpecWording.Location(row.Pole, g), LocationWidth));
+        sb.Append(problems.Count > 0 ? g.Violated : " ").Append(' ');
+        sb.Append(TextWidth.PadRight(SpecWording.Location(row.Pole, g), locationWidth));
         foreach (var column in columns)
         {
-            sb.Append(TextWidth.PadLeft(Figure(row, column, g), NumberWidth - 1)).Append(' ');
+            sb.Append(TextWidth.PadLeft(Fitting(digits => Figure(row, column, digits, g)), NumberWidth - 1)).Append(' ');
         }
 
         sb.Append(' ').Append(problems.Count > 0 ? string.Join(", ", problems) : g.Met);
@@ -133,20 +139,35 @@ public static class PoleTablePresenter
         return words;
     }
 
-    private static string Figure(PoleRow row, PoleColumn column, Glyphs g)
+    // Fewer significant digits rather than a cut-off number.
+    private static string Fitting(Func<int, string> figure)
+    {
+        for (int digits = 4; digits > 2; digits--)
+        {
+            string text = figure(digits);
+            if (TextWidth.Of(text) <= NumberWidth - 1)
+            {
+                return text;
+            }
+        }
+
+        return figure(2);
+    }
+
+    private static string Figure(PoleRow row, PoleColumn column, int digits, Glyphs g)
     {
         var m = row.Metrics;
         return column switch
         {
             PoleColumn.Damping => m.Damping is double z ? z.ToString("F4", System.Globalization.CultureInfo.InvariantCulture) : "-",
-            PoleColumn.NaturalFrequency => NumberText.Significant(m.NaturalFrequency),
-            PoleColumn.DecayRate => NumberText.Significant(m.DecayRate),
-            PoleColumn.Time => m.TimeToHalfSeconds is double half ? NumberText.Significant(half)
-                : m.TimeToDoubleSeconds is double twice ? g.TimeToDouble + " " + NumberText.Significant(twice) : "-",
-            PoleColumn.DampedFrequency => row.IsPair ? NumberText.Significant(m.DampedFrequency) : "0",
+            PoleColumn.NaturalFrequency => NumberText.Significant(m.NaturalFrequency, digits),
+            PoleColumn.DecayRate => NumberText.Significant(m.DecayRate, digits),
+            PoleColumn.Time => m.TimeToHalfSeconds is double half ? NumberText.Significant(half, digits)
+                : m.TimeToDoubleSeconds is double twice ? g.TimeToDouble + " " + NumberText.Significant(twice, digits) : "-",
+            PoleColumn.DampedFrequency => row.IsPair ? NumberText.Significant(m.DampedFrequency, digits) : "0",
         };
     }
 
-    private static ImmutableArray<string> Finish(ImmutableArray<string>.Builder lines, int width, int height) =>
-        lines.Take(Math.Max(1, height)).Select(l => TextWidth.PadRight(l, width)).ToImmutableArray();
+    private static ImmutableArray<string> Finish(ImmutableArray<string>.Builder lines, int width, int height, Glyphs glyphs) =>
+        lines.Take(Math.Max(1, height)).Select(l => TextWidth.PadRight(SafeText.Fit(l, width, glyphs.Ellipsis), width)).ToImmutableArray();
 }
