@@ -21,7 +21,7 @@ public sealed class DotCanvas
         Columns = columns;
         Rows = rows;
         Symbols = symbols;
-        DotsPerColumn = DotCells.DotsPerColumn(symbols);
+        DotsPerColumn = DotCells.DotsPerColumn;
         DotsPerRow = DotCells.DotsPerRow(symbols);
         bits = new byte[columns * rows];
         glyphs = new char[columns * rows];

@@ -20,8 +20,8 @@ internal static class DotCells
     // two dots in a 2x2 cell, so the three- and four-dot patterns only occur where lines cross: '+'.
     private const string AsciiChars = " ''-.|/+.\\|+_+++";
 
-    // Both sets are two dots wide; the parameter keeps call sites symmetric with DotsPerRow.
-    public static int DotsPerColumn(CanvasSymbols symbols) => symbols is CanvasSymbols.Braille or CanvasSymbols.Ascii ? 2 : 1;
+    /// <summary>Both symbol sets are two dots wide.</summary>
+    public const int DotsPerColumn = 2;
 
     public static int DotsPerRow(CanvasSymbols symbols) => symbols == CanvasSymbols.Braille ? 4 : 2;
 

@@ -38,21 +38,35 @@ internal static class AxesPainter
         PlaneRect bounds = map.Bounds;
         IReadOnlyList<double> realTicks = NiceTicks.Multiples(bounds.MinReal, bounds.MaxReal, realStep);
         IReadOnlyList<double> imaginaryTicks = NiceTicks.Multiples(bounds.MinImaginary, bounds.MaxImaginary, imaginaryStep);
+
         // ASCII has too few dots per cell for a grid to stay quiet; the axes and labels carry the scale there.
-        for (int i = 0; i < realTicks.Count && options.Grid && canvas.Symbols == CanvasSymbols.Braille; i++)
+        if (options.Grid && canvas.Symbols == CanvasSymbols.Braille)
         {
-            double re = realTicks[i];
+            DrawGrid(canvas, map, realTicks, imaginaryTicks);
+        }
+
+        if (options.Axes)
+        {
+            DrawAxes(canvas, map, realTicks, imaginaryTicks);
+        }
+    }
+
+    private static void DrawGrid(
+        DotCanvas canvas, in DotMapping map, IReadOnlyList<double> realTicks, IReadOnlyList<double> imaginaryTicks)
+    {
+        foreach (double re in realTicks)
+        {
             foreach (double im in imaginaryTicks)
             {
                 canvas.SetDot(map.DotX(re), map.DotY(im), GridTag);
             }
         }
+    }
 
-        if (!options.Axes)
-        {
-            return;
-        }
-
+    private static void DrawAxes(
+        DotCanvas canvas, in DotMapping map, IReadOnlyList<double> realTicks, IReadOnlyList<double> imaginaryTicks)
+    {
+        PlaneRect bounds = map.Bounds;
         if (bounds.MinImaginary <= 0 && bounds.MaxImaginary >= 0)
         {
             int y = map.DotY(0);

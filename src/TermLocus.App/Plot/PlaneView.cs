@@ -60,5 +60,5 @@ public sealed record PlaneView(Complex Centre, double UnitsPerColumn, double Cel
 
     /// <summary>The dot grid of a canvas of this size and symbol set, for mapping points to dots.</summary>
     internal DotMapping Mapping(int columns, int rows, CanvasSymbols symbols) =>
-        new(Bounds(columns, rows), columns * DotCells.DotsPerColumn(symbols), rows * DotCells.DotsPerRow(symbols));
+        new(Bounds(columns, rows), columns * DotCells.DotsPerColumn, rows * DotCells.DotsPerRow(symbols));
 }

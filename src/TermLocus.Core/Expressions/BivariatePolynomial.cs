@@ -41,6 +41,31 @@ internal sealed class BivariatePolynomial
     /// <summary>The number, for a constant.</summary>
     public double ConstantValue => bySPower.Length == 0 ? 0.0 : bySPower[0][0];
 
+    /// <summary>The largest m such that p^m divides every coefficient exactly; 0 for zero.</summary>
+    public int CommonPowerOfP()
+    {
+        int m = int.MaxValue;
+        foreach (var c in bySPower)
+        {
+            int low = 0;
+            while (low < c.Coefficients.Length && c.Coefficients[low] == 0.0)
+            {
+                low++;
+            }
+
+            if (!c.IsZero)
+            {
+                m = Math.Min(m, low);
+            }
+        }
+
+        return m == int.MaxValue ? 0 : m;
+    }
+
+    /// <summary>This polynomial divided by p^m, where p^m divides every coefficient (see <see cref="CommonPowerOfP"/>).</summary>
+    public BivariatePolynomial DivideByPowerOfP(int m) =>
+        m == 0 ? this : new(bySPower.Select(c => c.IsZero ? c : Polynomial.FromAscending(c.Coefficients.AsSpan()[m..])).ToArray());
+
     public static BivariatePolynomial Constant(double c) => new([Polynomial.Constant(c)]);
 
     /// <summary>The coefficient of p^j, as a polynomial in s (ascending).</summary>

@@ -35,7 +35,8 @@ internal static class ExpressionLexer
             }
             else
             {
-                tokens.Add(new Token(OperatorKind(c, i), i, 1, c.ToString(), 0.0));
+                var kind = OperatorKind(c, i);
+                tokens.Add(new Token(kind, i, 1, OperatorText(kind), 0.0));
                 i++;
             }
         }
@@ -54,6 +55,17 @@ internal static class ExpressionLexer
         '(' => TokenKind.OpenParen,
         ')' => TokenKind.CloseParen,
         _ => throw new ExpressionSyntaxException(offset, UnexpectedCharacter(c)),
+    };
+
+    private static string OperatorText(TokenKind kind) => kind switch
+    {
+        TokenKind.Plus => "+",
+        TokenKind.Minus => "-",
+        TokenKind.Star => "*",
+        TokenKind.Slash => "/",
+        TokenKind.Caret => "^",
+        TokenKind.OpenParen => "(",
+        _ => ")",
     };
 
     private static string UnexpectedCharacter(char c) => c switch

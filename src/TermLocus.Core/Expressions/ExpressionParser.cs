@@ -14,7 +14,8 @@ public static class ExpressionParser
     /// <param name="text">The expression and the file position of each of its characters.</param>
     /// <param name="file">The file named in error messages (as the user gave it).</param>
     /// <param name="variable"><see cref="ExpressionNames.LaplaceVariable"/> (default) or <see cref="ExpressionNames.ShiftVariable"/>.</param>
-    /// <exception cref="PlantFileException">A syntax error, printed as FILE:LINE:COL with what was expected.</exception>
+    /// <exception cref="PlantFileException">A syntax error, printed as FILE:LINE:COL with what was expected; or a
+    /// part free of parameters and variable without a finite real value (<c>ln(-1)</c>, <c>1/0</c>, <c>1e200*1e200</c>).</exception>
     /// <exception cref="ArgumentException"><paramref name="variable"/> is neither s nor z.</exception>
     public static ParsedExpression Parse(ExpressionText text, string file, string variable = ExpressionNames.LaplaceVariable)
     {
@@ -29,7 +30,9 @@ public static class ExpressionParser
         {
             var parser = new RecursiveDescentParser(text.Text, variable, offset => Describe(text, offset));
             var root = parser.ParseWhole();
-            return new ParsedExpression(text, file, variable, root, parser.Uses, parser.DistinctNames);
+            var parsed = new ParsedExpression(text, file, variable, root, parser.Uses, parser.DistinctNames);
+            parsed.CheckConstantParts();
+            return parsed;
         }
         catch (ExpressionSyntaxException e)
         {

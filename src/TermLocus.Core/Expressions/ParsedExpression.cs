@@ -103,8 +103,21 @@ public sealed class ParsedExpression
         }
         catch (ExpressionEvaluationException e)
         {
-            string quote = SourceQuote.Of(Source.Text, e.Site.Start, e.Site.End, 40);
-            throw new PlantFileException(ErrorAt(e.Site.Start, $"{e.Prefix}'{quote}'{e.Suffix}"));
+            throw Located(e);
+        }
+    }
+
+    /// <summary>Evaluates the parts free of parameters and variable (see <see cref="ConstantCheck"/>).</summary>
+    /// <exception cref="PlantFileException">A constant part has no finite real value or divides by zero, located.</exception>
+    internal void CheckConstantParts()
+    {
+        try
+        {
+            ConstantCheck.Run(Root);
+        }
+        catch (ExpressionEvaluationException e)
+        {
+            throw Located(e);
         }
     }
 
@@ -116,6 +129,12 @@ public sealed class ParsedExpression
 
     /// <inheritdoc/>
     public override string ToString() => Source.Text;
+
+    private PlantFileException Located(ExpressionEvaluationException e)
+    {
+        string quote = SourceQuote.Of(Source.Text, e.Site.Start, e.Site.End, 40);
+        return new PlantFileException(ErrorAt(e.Site.Start, $"{e.Prefix}'{quote}'{e.Suffix}"));
+    }
 
     private static int FirstDivisionByVariable(ExpressionNode node)
     {

@@ -41,7 +41,7 @@ internal static class PowerRules
         long degree = k * baseNode.Degree.Max;
         if (k > ExpressionLimits.MaxDegree || degree > ExpressionLimits.MaxDegree)
         {
-            throw new ExpressionSyntaxException(exponent.Start, RecursiveDescentParser.DegreeTooHigh(Math.Max(k, degree)));
+            throw new ExpressionSyntaxException(exponent.Start, ParserMessages.DegreeTooHigh(Math.Max(k, degree)));
         }
 
         return new PowerNode(baseNode.Start, exponent.End, baseNode, exponent, (int)k);

@@ -52,7 +52,7 @@ internal sealed class RecursiveDescentParser
     {
         if (Current.Kind == TokenKind.End)
         {
-            throw new ExpressionSyntaxException(0, $"empty expression: expected {OperandWords}");
+            throw new ExpressionSyntaxException(0, $"empty expression: expected {ParserMessages.OperandWords(variable)}");
         }
 
         var node = ParseSum();
@@ -63,13 +63,11 @@ internal sealed class RecursiveDescentParser
 
         if (Current.Kind != TokenKind.End)
         {
-            throw new ExpressionSyntaxException(Current.Offset, $"unexpected {Describe(Current)} after a complete expression");
+            throw new ExpressionSyntaxException(Current.Offset, $"unexpected {ParserMessages.Describe(Current)} after a complete expression");
         }
 
         return node;
     }
-
-    private string OperandWords => $"a number, a parameter name, {variable} or '('";
 
     private ExpressionNode ParseSum()
     {
@@ -101,15 +99,14 @@ internal sealed class RecursiveDescentParser
     {
         int start = Current.Offset;
         var first = ParseUnary();
-        var factors = ImmutableArray.CreateBuilder<ProductFactor>();
-        factors.Add(new ProductFactor(first, false));
+        ImmutableArray<ProductFactor>.Builder? factors = null;
         bool hasVariable = first.ContainsVariable;
         var bound = first.Degree;
         while (true)
         {
             if (StartsOperand(Current))
             {
-                throw MissingStar(start);
+                throw ParserMessages.MissingStar(text, start, Previous.End, Current);
             }
 
             if (Current.Kind is not (TokenKind.Star or TokenKind.Slash))
@@ -122,13 +119,19 @@ internal sealed class RecursiveDescentParser
             start = Current.Offset;
             var factor = ParseUnary();
             bool divide = op.Kind == TokenKind.Slash;
+            factors ??= ImmutableArray.CreateBuilder<ProductFactor>();
+            if (factors.Count == 0)
+            {
+                factors.Add(new ProductFactor(first, false));
+            }
+
             factors.Add(new ProductFactor(factor, divide));
             hasVariable |= factor.ContainsVariable;
             bound = divide ? DegreeBound.Quotient(bound, factor.Degree) : DegreeBound.Product(bound, factor.Degree);
             CheckDegree(bound, op.Offset);
         }
 
-        return factors.Count == 1
+        return factors is null
             ? first
             : new ProductNode(first.Start, Previous.End, factors.ToImmutable(), hasVariable, bound);
     }
@@ -187,9 +190,9 @@ internal sealed class RecursiveDescentParser
                 position++;
                 var inner = ParseSum();
                 ExpectClose(token);
-                return inner;
+                return inner with { Start = token.Offset, End = Previous.End };
             default:
-                throw ExpectedOperand(token);
+                throw ParserMessages.ExpectedOperand(token, position > 0 ? Previous : null, variable);
         }
     }
 
@@ -257,54 +260,18 @@ internal sealed class RecursiveDescentParser
             return;
         }
 
-        string found = Current.Kind == TokenKind.End ? "the end of the expression" : Describe(Current);
+        string found = Current.Kind == TokenKind.End ? "the end of the expression" : ParserMessages.Describe(Current);
         throw new ExpressionSyntaxException(
             Current.Offset, $"expected ')' to close the '(' at {describePosition(open.Offset)}, found {found}");
     }
 
     private static bool StartsOperand(Token token) => token.Kind is TokenKind.Number or TokenKind.Name or TokenKind.OpenParen;
 
-    private ExpressionSyntaxException MissingStar(int leftStart)
-    {
-        string left = SourceQuote.Of(text, leftStart, Previous.End, 20);
-        string right = Current.Kind == TokenKind.OpenParen ? "(...)" : SourceQuote.Of(text, Current.Offset, Current.End, 20);
-        return new ExpressionSyntaxException(
-            Current.Offset, $"missing '*': multiplication must be written out, write {left}*{right}");
-    }
-
-    private ExpressionSyntaxException ExpectedOperand(Token token)
-    {
-        if (token.Kind == TokenKind.Star && position > 0 && Previous.Kind == TokenKind.Star)
-        {
-            return new ExpressionSyntaxException(Previous.Offset, "'**' is not an operator: write ^ for a power");
-        }
-
-        if (token.Kind == TokenKind.End)
-        {
-            string after = position > 0 ? $" after {Describe(Previous)}" : string.Empty;
-            return new ExpressionSyntaxException(token.Offset, $"the expression ends too early: expected {OperandWords}{after}");
-        }
-
-        if (token.Kind == TokenKind.Plus)
-        {
-            return new ExpressionSyntaxException(token.Offset, $"unexpected '+': expected {OperandWords} (there is no unary plus)");
-        }
-
-        return new ExpressionSyntaxException(token.Offset, $"expected {OperandWords}, found {Describe(token)}");
-    }
-
-    private static string Describe(Token token) =>
-        token.Kind == TokenKind.End ? "the end" : $"'{SourceQuote.Shorten(token.Text, 20)}'";
-
     private static void CheckDegree(DegreeBound bound, int offset)
     {
         if (bound.Max > ExpressionLimits.MaxDegree)
         {
-            throw new ExpressionSyntaxException(offset, DegreeTooHigh(bound.Max));
+            throw new ExpressionSyntaxException(offset, ParserMessages.DegreeTooHigh(bound.Max));
         }
     }
-
-    /// <summary>The message for a degree above <see cref="ExpressionLimits.MaxDegree"/>.</summary>
-    internal static string DegreeTooHigh(long degree) =>
-        $"degree too high: this would reach degree {degree} (at most {ExpressionLimits.MaxDegree})";
 }
