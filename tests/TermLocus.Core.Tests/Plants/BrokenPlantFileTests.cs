@@ -1,5 +1,3 @@
-using System.Text;
-using System.Text.RegularExpressions;
 using TermLocus.Core.Plants;
 
 namespace TermLocus.Core.Tests.Plants;
@@ -9,20 +7,11 @@ namespace TermLocus.Core.Tests.Plants;
 /// (<c># expect: LINE:COL: MESSAGE</c>) or in a sibling <c>.expected</c> file. Positions were checked by hand against
 /// the file; the form FILE:LINE:COL: error: MESSAGE is the compilers' convention (common practice).
 /// </summary>
-public sealed partial class BrokenPlantFileTests
+public sealed class BrokenPlantFileTests
 {
     private static readonly string Folder = Path.Combine(AppContext.BaseDirectory, "Plants", "Broken");
 
-    public static TheoryData<string> BrokenFiles()
-    {
-        var data = new TheoryData<string>();
-        foreach (var file in Directory.GetFiles(Folder, "*.toml").Order(StringComparer.Ordinal))
-        {
-            data.Add(Path.GetFileName(file));
-        }
-
-        return data;
-    }
+    public static TheoryData<string> BrokenFiles() => ExpectedErrorLine.FilesIn(Folder);
 
     [Fact]
     public void The_suite_has_at_least_thirty_broken_files()
@@ -35,7 +24,7 @@ public sealed partial class BrokenPlantFileTests
     public void Reading_a_broken_file_fails_with_its_expected_located_error(string name)
     {
         var path = Path.Combine(Folder, name);
-        var (line, column, message) = Expected(path);
+        var (line, column, message) = ExpectedErrorLine.Of(path);
 
         // Assert.Throws demands exactly this type: any other exception escaping the reader fails the test.
         var error = Assert.Throws<PlantFileException>(() => PlantFileReader.Read(path)).Error;
@@ -65,25 +54,4 @@ public sealed partial class BrokenPlantFileTests
 
         Assert.DoesNotContain(error.Message, c => char.IsControl(c));
     }
-
-    private static (int Line, int Column, string Message) Expected(string path)
-    {
-        var sibling = path + ".expected";
-        var text = File.Exists(sibling) ? File.ReadAllText(sibling).TrimEnd('\n') : FirstLine(path);
-        var match = ExpectPattern().Match(text);
-        Assert.True(match.Success, $"{path} states no expected error");
-        return (int.Parse(match.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture),
-            int.Parse(match.Groups[2].Value, System.Globalization.CultureInfo.InvariantCulture), match.Groups[3].Value);
-    }
-
-    // The first line of every fixture is valid UTF-8 even when the rest of the file is not.
-    private static string FirstLine(string path)
-    {
-        var bytes = File.ReadAllBytes(path);
-        var end = Array.IndexOf(bytes, (byte)'\n');
-        return Encoding.UTF8.GetString(bytes, 0, end < 0 ? bytes.Length : end);
-    }
-
-    [GeneratedRegex(@"^(?:# expect: )?(\d+):(\d+): (.*)$")]
-    private static partial Regex ExpectPattern();
 }
