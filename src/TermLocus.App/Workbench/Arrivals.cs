@@ -59,7 +59,8 @@ internal static class Arrivals
             NoOverlay when s.Session is null => new LibraryOverlay(0),
             _ => s.Overlay,
         };
-        return Update.Done(s with { Library = library, Overlay = overlay });
+        var message = scanned.Problem is null ? s.Message : StatusMessage.Error(SafeText.Visible(scanned.Problem));
+        return Update.Done(s with { Library = library, Overlay = overlay, Message = message });
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Saved(WorkbenchState s, OperatingPointSaved saved)
@@ -71,7 +72,7 @@ internal static class Arrivals
 
         var updated = session with
         {
-            Loaded = session.Loaded with { Plant = saved.Plant },
+            Loaded = session.Loaded with { Plant = saved.Plant, Document = saved.Document },
             Sweep = session.Sweep with { SavedValue = saved.Value },
         };
         string file = SafeText.Visible(Path.GetFileName(saved.Plant.Path));

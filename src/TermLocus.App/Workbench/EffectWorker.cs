@@ -12,7 +12,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     public Message? Perform(Effect effect) => effect switch
     {
         LoadPlantEffect e => Load(e.Path),
-        ScanLibraryEffect e => new LibraryScanned(e.Folder, CoreBridge.ScanLibrary(e.Folder)),
+        ScanLibraryEffect e => Scan(e.Folder),
         TraceLocusEffect e => Trace(e),
         SaveOperatingPointEffect e => Save(e),
         SaveRecoveryEffect e => WriteRecovery(e),
@@ -30,9 +30,21 @@ public sealed class EffectWorker(SaveContext saveContext)
         {
             return new PlantLoadFailed(path, e.Error.ToString());
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
         {
             return new PlantLoadFailed(path, $"{path}: error: {e.Message}");
+        }
+    }
+
+    private static Message Scan(string folder)
+    {
+        try
+        {
+            return new LibraryScanned(folder, CoreBridge.ScanLibrary(folder));
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            return new LibraryScanned(folder, [], $"cannot read the library folder {folder}: {e.Message}");
         }
     }
 
@@ -42,7 +54,7 @@ public sealed class EffectWorker(SaveContext saveContext)
         {
             return new LocusTraced(CoreBridge.Trace(e.Loaded, e.Key));
         }
-        catch (Exception ex) when (ex is ArithmeticException or ArgumentException or InvalidOperationException or NotSupportedException)
+        catch (Exception ex) when (ex is ArithmeticException or ArgumentException or InvalidOperationException or PlantFileException)
         {
             return new LocusTraceFailed(e.Key, ex.Message);
         }
@@ -52,12 +64,16 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            var saved = CoreBridge.SaveOperatingPoint(e.Plant, e.Value, e.Verdict, saveContext, e.Plant.Path);
-            return new OperatingPointSaved(saved, e.Value, e.QuitAfter);
+            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext);
+            return new OperatingPointSaved(saved.Plant, saved, e.Value, e.QuitAfter);
         }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or PlantFileException or NotSupportedException)
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException)
         {
             return new OperatingPointSaveFailed(ex.Message);
+        }
+        catch (PlantFileException ex)
+        {
+            return new OperatingPointSaveFailed(ex.Error.ToString());
         }
     }
 
@@ -65,14 +81,13 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            CoreBridge.SaveOperatingPoint(e.Plant, e.Value, e.Verdict, saveContext, SaveRecoveryEffect.RecoveryPathFor(e.Plant.Path));
+            CoreBridge.WriteRecovery(e.Loaded, e.Value, e.Verdict, saveContext);
+            return null;
         }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or PlantFileException or NotSupportedException)
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or PlantFileException)
         {
-            // On the way out there is nobody to tell but the log the terminal layer writes after restoring the screen.
+            // On the way out there is nobody to tell but the report printed after the terminal is restored.
             return new OperatingPointSaveFailed("recovery file not written: " + ex.Message);
         }
-
-        return null;
     }
 }

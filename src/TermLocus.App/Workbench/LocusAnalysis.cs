@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using TermLocus.Core.Analysis;
 
 namespace TermLocus.App.Workbench;
 

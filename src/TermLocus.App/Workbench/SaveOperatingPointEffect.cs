@@ -1,5 +1,3 @@
-using TermLocus.Core.Plants;
-
 namespace TermLocus.App.Workbench;
 
 /// <summary>
@@ -7,8 +5,8 @@ namespace TermLocus.App.Workbench;
 /// the file changed on disk since it was read; answers <see cref="OperatingPointSaved"/> or
 /// <see cref="OperatingPointSaveFailed"/>.
 /// </summary>
-/// <param name="Plant">The plant as read.</param>
+/// <param name="Loaded">The plant as read (with the file's bytes and hash).</param>
 /// <param name="Value">The swept value to save.</param>
 /// <param name="Verdict">One line saying how the value fares against the specs.</param>
 /// <param name="QuitAfter">Quit once saved (the answer to the quit question).</param>
-public sealed record SaveOperatingPointEffect(Plant Plant, double Value, string Verdict, bool QuitAfter) : Effect;
+public sealed record SaveOperatingPointEffect(LoadedPlant Loaded, double Value, string Verdict, bool QuitAfter) : Effect;

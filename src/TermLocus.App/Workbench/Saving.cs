@@ -24,7 +24,7 @@ internal static class Saving
 
         string verdict = SpecWording.Verdict(session.Poles, Glyphs.Unicode);
         return (s with { Message = StatusMessage.Info($"saving {sweep.Name} = {NumberText.Exact(sweep.Value)}") },
-            [new SaveOperatingPointEffect(session.Loaded.Plant, sweep.Value, verdict, quitAfter)]);
+            [new SaveOperatingPointEffect(session.Loaded, sweep.Value, verdict, quitAfter)]);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Quit(WorkbenchState s) =>
@@ -35,7 +35,7 @@ internal static class Saving
         if (s.Session is { Unsaved: true } session)
         {
             string verdict = SpecWording.Verdict(session.Poles, Glyphs.Unicode);
-            return (s, [new SaveRecoveryEffect(session.Loaded.Plant, session.Sweep.Value, verdict), new QuitEffect()]);
+            return (s, [new SaveRecoveryEffect(session.Loaded, session.Sweep.Value, verdict), new QuitEffect()]);
         }
 
         return (s, [new QuitEffect()]);

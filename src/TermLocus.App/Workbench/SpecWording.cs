@@ -42,9 +42,16 @@ public static class SpecWording
     /// </summary>
     public static string Violation(SpecMiss miss, Glyphs g)
     {
+        string key = SafeText.Visible(miss.SpecKey);
+        string at = Location(miss.Pole, g);
+        if (miss.Actual is not double actual)
+        {
+            // Time limits on a pole that does not decay, damping of a pole at the origin.
+            return $"{key} {NumberText.Exact(miss.Limit)}: the pole at {at} does not decay";
+        }
+
         string relation = IsMinimum(miss.SpecKey) ? "<" : ">";
-        return $"{SafeText.Visible(miss.SpecKey)}: {Figure(miss.SpecKey, g)} {NumberText.Significant(miss.Actual)} " +
-               $"{relation} {NumberText.Exact(miss.Limit)} at {Location(miss.Pole, g)}";
+        return $"{key}: {Figure(miss.SpecKey, g)} {NumberText.Significant(actual)} {relation} {NumberText.Exact(miss.Limit)} at {at}";
     }
 
     /// <summary>A pole's place in the s-plane: <c>-12.40</c> for a real pole, <c>-3.100 ± j3.900</c> for a pair.</summary>

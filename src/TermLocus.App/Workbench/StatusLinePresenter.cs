@@ -39,6 +39,11 @@ public static class StatusLinePresenter
 
         var poles = session.Poles;
         var sweep = session.Sweep;
+        if (poles.Problem is { } problem)
+        {
+            return $"{g.Violated} at {sweep.Name} = {NumberText.Exact(sweep.Value)} {SafeText.Visible(problem)}";
+        }
+
         if (!poles.AllMet)
         {
             int more = poles.Misses.Length - 1;

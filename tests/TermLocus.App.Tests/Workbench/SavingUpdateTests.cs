@@ -31,7 +31,7 @@ public class SavingUpdateTests
         var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(effects));
         Assert.True(save.QuitAfter);
         Assert.Equal(5.2, save.Value);
-        var (_, after) = Update.Receive(state, new OperatingPointSaved(save.Plant, save.Value, QuitAfter: true));
+        var (_, after) = Update.Receive(state, new OperatingPointSaved(save.Loaded.Plant, null, save.Value, QuitAfter: true));
         Assert.Equal<Effect>([new QuitEffect()], after);
     }
 
@@ -57,7 +57,7 @@ public class SavingUpdateTests
     public void A_saved_value_is_no_longer_unsaved()
     {
         var unsaved = Unsaved();
-        var saved = Update.Receive(unsaved, new OperatingPointSaved(unsaved.Session!.Loaded.Plant, 5.2, QuitAfter: false)).State;
+        var saved = Update.Receive(unsaved, new OperatingPointSaved(unsaved.Session!.Loaded.Plant, null, 5.2, QuitAfter: false)).State;
         Assert.False(saved.Unsaved);
         Assert.Equal(5.2, saved.Session!.Sweep.SavedValue);
         Assert.Equal("saved K = 5.2 to second.toml", saved.Message!.Text);
@@ -82,7 +82,7 @@ public class SavingUpdateTests
         var recovery = Assert.IsType<SaveRecoveryEffect>(effects[0]);
         Assert.Equal(5.2, recovery.Value);
         Assert.IsType<QuitEffect>(effects[1]);
-        Assert.Equal("/plants/second.toml.recovery", SaveRecoveryEffect.RecoveryPathFor(recovery.Plant.Path));
+        Assert.Equal("/plants/second.toml.recovery", SaveRecoveryEffect.RecoveryPathFor(recovery.Loaded.Plant.Path));
     }
 
     [Fact]

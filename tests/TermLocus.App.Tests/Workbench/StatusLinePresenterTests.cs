@@ -85,3 +85,25 @@ public class StatusLinePresenterTests
         Assert.Equal("? help  q quit", KeyHints.Line(TestPlants.Opened(), 16, Glyphs.Unicode));
     }
 }
+
+public class SpecCheckThroughTheWorkbenchTests
+{
+    [Fact]
+    public void Stepping_into_a_violation_shows_it_at_once()
+    {
+        // At K = 5 the poles are -1 ± j2 with ζ = 1/√5 = 0.4472 (Ogata 5th ed. §5-3, from memory), below 0.5.
+        var state = TestPlants.Opened(TestPlants.SecondOrder(k: 5, specs: new Specs(MinDamping: 0.5)));
+        Assert.Equal("! min_damping: ζ 0.4472 < 0.5 at -1.000 ± j2.000", StatusLinePresenter.Verdict(state.Session, Glyphs.Unicode));
+        // K = 4 is the boundary (ζ = 1/√4 = 0.5 exactly; a pole on the limit meets it).
+        var boundary = Update.Receive(state, new ValuePicked(4)).State;
+        Assert.Equal("✓ all specs met at K = 4", StatusLinePresenter.Verdict(boundary.Session, Glyphs.Unicode));
+    }
+
+    [Fact]
+    public void A_time_limit_on_a_pole_that_does_not_decay_says_so()
+    {
+        // K = -1: roots -1 ± √2; the one at +0.4142 grows, so it never halves.
+        var state = TestPlants.Opened(TestPlants.SecondOrder(k: -1, specs: new Specs(MaxTimeToHalfSeconds: 1)));
+        Assert.Equal("! max_time_to_half 1: the pole at 0.4142 does not decay", StatusLinePresenter.Verdict(state.Session, Glyphs.Unicode));
+    }
+}

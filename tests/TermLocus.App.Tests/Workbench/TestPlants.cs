@@ -34,7 +34,7 @@ internal static class TestPlants
                 null,
                 null,
                 null),
-            specs ?? new Specs(MinDamping: 0.5),
+            specs ?? new Specs(MinDamping: 0.4),
             []);
         var family = CharacteristicFamily.FromAffine(new AffineSplit(Polynomial.FromAscending(0, 2, 1), Polynomial.One));
         return new LoadedPlant(plant, family, new Interval(0, 20), [Complex.Zero, new Complex(-2, 0)], []);

@@ -1,8 +1,8 @@
 using System.Collections.Immutable;
 using System.Numerics;
 using TermLocus.App.Workbench;
-using TermLocus.Core.Algebra;
 using TermLocus.Core.Analysis;
+using TermLocus.Core.Algebra;
 using TermLocus.Core.Plants;
 
 namespace TermLocus.Tests.Tui;
