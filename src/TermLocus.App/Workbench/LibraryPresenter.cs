@@ -31,7 +31,7 @@ public static class LibraryPresenter
         else
         {
             int room = Math.Max(1, height - 1);
-            int nameWidth = Math.Min(24, library.Items.Max(i => TextWidth.Of(SafeText.Visible(i.FileName))));
+            int nameWidth = Math.Min(Math.Max(12, width / 3), library.Items.Max(i => TextWidth.Of(SafeText.Visible(i.FileName))));
             int first = Math.Clamp(selected - room + 1, 0, Math.Max(0, library.Items.Length - room));
             for (int i = first; i < Math.Min(library.Items.Length, first + room); i++)
             {
@@ -50,7 +50,7 @@ public static class LibraryPresenter
             LibraryVerdict.Fail => g.Violated + " FAIL",
             LibraryVerdict.Error => g.Violated + " ERROR",
         };
-        string name = TextWidth.PadRight(SafeText.Visible(item.FileName), nameWidth);
+        string name = TextWidth.PadRight(SafeText.Fit(item.FileName, nameWidth, g.Ellipsis), nameWidth);
         string detail = item.Verdict == LibraryVerdict.Error
             ? SafeText.Visible(item.Problem ?? "could not be read")
             : SafeText.Visible(item.Title ?? string.Empty);

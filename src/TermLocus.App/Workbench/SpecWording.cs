@@ -51,7 +51,14 @@ public static class SpecWording
         }
 
         string relation = IsMinimum(miss.SpecKey) ? "<" : ">";
-        return $"{key}: {Figure(miss.SpecKey, g)} {NumberText.Significant(actual)} {relation} {NumberText.Exact(miss.Limit)} at {at}";
+        // On a boundary the figure rounds to the limit; show the digits that make "0.3000 < 0.3" honest.
+        string figure = NumberText.Significant(actual);
+        if (figure == NumberText.Significant(miss.Limit))
+        {
+            figure = NumberText.Short(actual, 12);
+        }
+
+        return $"{key}: {Figure(miss.SpecKey, g)} {figure} {relation} {NumberText.Exact(miss.Limit)} at {at}";
     }
 
     /// <summary>A pole's place in the s-plane: <c>-12.40</c> for a real pole, <c>-3.100 ± j3.900</c> for a pair.</summary>

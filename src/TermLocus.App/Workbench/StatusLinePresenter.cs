@@ -41,7 +41,7 @@ public static class StatusLinePresenter
         var sweep = session.Sweep;
         if (poles.Problem is { } problem)
         {
-            return $"{g.Violated} at {sweep.Name} = {NumberText.Exact(sweep.Value)} {SafeText.Visible(problem)}";
+            return $"{g.Violated} at {sweep.Name} = {NumberText.Short(sweep.Value)} {SafeText.Visible(problem)}";
         }
 
         if (!poles.AllMet)
@@ -57,7 +57,7 @@ public static class StatusLinePresenter
             return $"{g.Violated} unstable: a pole at {SpecWording.Location(unstable[0], g)} is in the right half-plane";
         }
 
-        string at = $"at {sweep.Name} = {NumberText.Exact(sweep.Value)}";
+        string at = $"at {sweep.Name} = {NumberText.Short(sweep.Value)}";
         return HasSpecs(session) ? $"{g.Met} all specs met {at}" : $"{g.Met} stable {at}; the file sets no specs";
     }
 

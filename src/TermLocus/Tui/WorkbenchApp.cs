@@ -11,7 +11,10 @@ namespace TermLocus.Tui;
 /// </summary>
 public static class WorkbenchApp
 {
-    /// <summary>Runs the workbench until the user quits; returns the exit code (0 done, 2 cannot start).</summary>
+    /// <summary>
+    /// Runs the workbench until the user quits; returns the exit code: 0 done, 2 cannot start, 70 internal error,
+    /// 128 + n when ended by signal n (SIGTERM, SIGINT, SIGQUIT; SIGHUP ends the process by its default action).
+    /// </summary>
     /// <param name="options">What to open and how to draw.</param>
     /// <param name="stderr">Where start-up problems and crash reports go (after the terminal is restored).</param>
     public static int Run(WorkbenchOptions options, TextWriter stderr)
@@ -36,7 +39,7 @@ public static class WorkbenchApp
 
         var symbols = SymbolChoice.Detect(environment, options.Symbols);
         bool colour = !options.NoColor && string.IsNullOrEmpty(environment.GetValueOrDefault("NO_COLOR"));
-        var crash = RunScreen(plantFile, folder, symbols, colour, options.NoMouse);
+        var (crash, signalExit) = RunScreen(plantFile, folder, symbols, colour, options.NoMouse);
         if (crash is not null)
         {
             stderr.WriteLine($"termlocus: internal error: {crash.GetType().Name}: {crash.Message}");
@@ -44,7 +47,7 @@ public static class WorkbenchApp
             return 70;
         }
 
-        return 0;
+        return signalExit;
     }
 
     private static string? StartProblem(WorkbenchOptions options, IReadOnlyDictionary<string, string?> environment)
@@ -70,8 +73,9 @@ public static class WorkbenchApp
 
     // Everything that touches the terminal lives here, so that it is restored (by disposing the application) before
     // anything is printed.
-    private static Exception? RunScreen(string? plantFile, string? folder, CanvasSymbols symbols, bool colour, bool noMouse)
+    private static (Exception? Crash, int ExitCode) RunScreen(string? plantFile, string? folder, CanvasSymbols symbols, bool colour, bool noMouse)
     {
+        int exitCode = 0;
         var (state, effects) = Update.Start(plantFile, folder);
         var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UtcNow, $"{Environment.UserName}@{Environment.MachineName}"));
         using IApplication app = Application.Create();
@@ -86,19 +90,33 @@ public static class WorkbenchApp
         var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
         using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);
         KeyRouter.Install(app, controller, screen);
-        using var signals = new SignalGuard(() => app.Invoke(controller.EmergencyExit));
+        using var signals = new SignalGuard(
+            stop: code =>
+            {
+                exitCode = code;
+                app.Invoke(controller.EmergencyExit);
+            },
+            hangUp: () => WriteRecovery(controller.State, worker));
         controller.Start(effects);
         try
         {
             app.Run(screen);
-            return null;
+            return (null, exitCode);
         }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
             // Keep the user's value before the terminal is restored and the report printed.
-            new InlineEffectRunner(worker.Perform).Run(
-                Update.Apply(controller.State, Command.QuitNow).Effects.FirstOrDefault() ?? new QuitEffect(), _ => { });
-            return e;
+            WriteRecovery(controller.State, worker);
+            return (e, 70);
+        }
+    }
+
+    // The state is immutable, so reading it from another thread is safe; Update decides whether anything is unsaved.
+    private static void WriteRecovery(WorkbenchState state, EffectWorker worker)
+    {
+        foreach (var effect in Update.Apply(state, Command.QuitNow).Effects.OfType<SaveRecoveryEffect>())
+        {
+            worker.Perform(effect);
         }
     }
 }
