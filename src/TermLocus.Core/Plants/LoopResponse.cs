@@ -12,9 +12,11 @@ namespace TermLocus.Core.Plants;
 /// <item>Continuous loop: exact at every grid time (<see cref="ResponseMethod.Continuous"/>); with a delay, the
 /// delay is simulated exactly inside the loop (<see cref="ResponseMethod.ExactDelay"/>), not through its Padé
 /// approximant, except when it is shorter than half a grid step (<see cref="ResponseMethod.PadeDelay"/>). The grid is
-/// <see cref="ResponseGrid.For"/> of the reference-to-output function (with the Padé factor when delayed) plus the delay.</item>
+/// <see cref="ResponseGrid.For"/> of the reference-to-output function (with the Padé factor when delayed, made at
+/// least as long and as fine as that of the delay-free loop) plus the delay.</item>
 /// <item>Sampled loop: the output at the sample instants kT (<see cref="ResponseMethod.Sampled"/>); what the plant
-/// output does between samples is not computed.</item>
+/// output does between samples is not computed, and the figures are those of the samples
+/// (<see cref="StepFigures.FromSamples"/>).</item>
 /// </list>
 /// Stability, the steady state and the second-order estimates come from the characteristic polynomial's roots
 /// (the Padé one for a delayed continuous loop, the same the locus shows), each root read through
@@ -78,7 +80,7 @@ public sealed record LoopResponse(
     private static LoopResponse Continuous(LoopModel model, IReadOnlyDictionary<string, double> values, RationalFunction closed)
     {
         double delay = model.DelaySeconds;
-        var grid = ResponseGrid.For(closed, delay);
+        var grid = delay > 0.0 ? DelayedGrid(model, values, closed) : ResponseGrid.For(closed);
         var poles = PolynomialRoots.Find(closed.Denominator);
         var (method, trace, failure) = delay > 0.0
             ? DelayedTrace(model, values, closed, grid)
@@ -105,7 +107,7 @@ public sealed record LoopResponse(
         LoopModel model, IReadOnlyDictionary<string, double> values, RationalFunction closed, ResponseGrid grid)
     {
         double delay = model.DelaySeconds;
-        double spacing = grid.DurationSeconds / (grid.Samples - 1);
+        double spacing = Spacing(grid);
         if (delay < spacing / 2.0)
         {
             var pade = model.Options.DelayOrder >= PadeApproximant.DefaultOrder ? closed : PadeClosedLoop(model, values);
@@ -119,6 +121,30 @@ public sealed record LoopResponse(
             ? (ResponseMethod.ExactDelay, trace, null)
             : (ResponseMethod.None, null, "the delayed loop cannot be simulated: " + error);
     }
+
+    // The grid of the Padé closed loop, stretched to the duration and resolution of the delay-free closed loop when
+    // those are longer or finer: a short delay leaves the loop's own time scales in charge, and its approximant's
+    // fast, badly scaled roots must not be the only thing that sets them.
+    private static ResponseGrid DelayedGrid(LoopModel model, IReadOnlyDictionary<string, double> values, RationalFunction closed)
+    {
+        double delay = model.DelaySeconds;
+        var pade = ResponseGrid.For(closed, delay);
+        var (forward, feedback) = model.DelayFreePaths(values)!.Value;
+        var open = forward * feedback;
+        var characteristic = model.IsPositiveFeedback ? open.Denominator - open.Numerator : open.Denominator + open.Numerator;
+        if (characteristic.IsZero)
+        {
+            return pade;
+        }
+
+        var free = ResponseGrid.For(new RationalFunction(forward.Numerator * feedback.Denominator, characteristic), delay);
+        double duration = Math.Max(pade.DurationSeconds, free.DurationSeconds);
+        double spacing = Math.Min(Spacing(pade), Spacing(free));
+        double samples = Math.Clamp(Math.Ceiling(duration / spacing) + 1.0, ResponseGrid.MinimumAutomaticSamples, ResponseGrid.MaximumAutomaticSamples);
+        return new ResponseGrid(duration, (int)samples);
+    }
+
+    private static double Spacing(ResponseGrid grid) => grid.DurationSeconds / (grid.Samples - 1);
 
     // The reference-to-output function with the delay's approximant of the default order, for a model built with
     // a lower one.
@@ -148,7 +174,7 @@ public sealed record LoopResponse(
             trace,
             LoopStability.IsStableInZ(closed.Denominator),
             steady,
-            StepFigures.From(trace, steady),
+            StepFigures.FromSamples(trace, steady),
             equivalent.Length == 0 ? null : SecondOrderEstimate.FromPoles(equivalent, model.DelaySeconds),
             null,
             model.SamplingWarning(values));
