@@ -1,8 +1,6 @@
 using System.Diagnostics.CodeAnalysis;
 using System.Globalization;
 using System.Numerics;
-using MathNet.Numerics.LinearAlgebra;
-using RealVector = MathNet.Numerics.LinearAlgebra.Vector<double>;
 using TermLocus.Core.Algebra;
 
 namespace TermLocus.Core.Time;
