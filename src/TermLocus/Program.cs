@@ -16,9 +16,7 @@ public static class Program
         return app.Run(args);
     }
 
-    private static int RunWorkbench(WorkbenchRequest request)
-    {
-        Console.Error.WriteLine("termlocus: the full-screen workbench is not built yet; use a verb (termlocus --help)");
-        return 2;
-    }
+    private static int RunWorkbench(WorkbenchRequest request) =>
+        Tui.WorkbenchApp.Run(
+            new Tui.WorkbenchOptions(request.Path, request.NoColor, request.Symbols, request.NoMouse), Console.Error);
 }
