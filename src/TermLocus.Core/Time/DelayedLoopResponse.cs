@@ -15,7 +15,8 @@ namespace TermLocus.Core.Time;
 /// state one step ahead is η(t + h) = Σᵢ Eᵢ·η(t − iT), where Eᵢ are the blocks of the exponential of the stacked
 /// past segments (see <see cref="DelayChainExponential"/>). This is the exact solution of the delay equation at the
 /// grid instants, for any k, with no holding or interpolation of the delayed signal; k only sets how densely the
-/// output is sampled. Error: rounding (about 1e-12 relative over thousands of steps in the tests), plus the
+/// output is sampled. Error: rounding (in the tests the values match method-of-steps closed forms to 1e-11 over
+/// twelve delays, and a grid of 1 and of 64 steps per delay agree to 1e-14 where they meet), plus the
 /// neglected tail of the sum: past segments are kept until their block falls below 1e-17 of the largest, or up to
 /// <see cref="MaximumSegments"/> of them. The blocks shrink like (h·‖N‖)ⁱ/i! when F and H do not both feed through
 /// directly, so the tail is nil in practice; when both do (a neutral loop, |d| = |d_F·d_H|) they shrink like |d|ⁱ,
