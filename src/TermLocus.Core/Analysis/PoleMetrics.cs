@@ -24,6 +24,12 @@ public sealed record PoleMetrics(
     double? TimeToHalfSeconds,
     double? TimeToDoubleSeconds)
 {
+    /// <summary>
+    /// The 2 % settling-time estimate 4/σ = 4/(ζωn) in seconds (the envelope e^(-σt) falls below e^-4 ≈ 1.8 %)
+    /// for σ &gt; 0, else null.
+    /// </summary>
+    public double? SettlingTime2PctSeconds => DecayRate > 0 ? 4.0 / DecayRate : null;
+
     /// <summary>The figures of pole <paramref name="s"/> (finite).</summary>
     public static PoleMetrics Of(Complex s)
     {
