@@ -210,8 +210,8 @@ internal sealed class TracePieceRefiner
             }
         }
 
-        var roots = PolynomialRoots.Find(Polynomial.FromAscending(buffer));
-        return roots.Length == degree && roots.All(r => double.IsFinite(r.Real) && double.IsFinite(r.Imaginary))
+        var roots = new Complex[degree];
+        return PolynomialRoots.TryFind(buffer, roots, RootFindingOptions.Default, out int count) && count == degree
             ? roots
             : null;
     }
