@@ -2,7 +2,6 @@ using System.Numerics;
 using TermLocus.App.Plot;
 using TermLocus.Core.Analysis;
 using TermLocus.Core.Plants;
-using SpecBoundary = TermLocus.App.Plot.SpecBoundary;
 
 namespace TermLocus.App.Tests.Plot;
 
