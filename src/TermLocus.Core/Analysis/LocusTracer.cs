@@ -71,7 +71,8 @@ public static class LocusTracer
     /// <summary>
     /// The closed-loop poles at swept value <paramref name="p"/>: the roots of P(s; p), sorted by real part then
     /// imaginary part; empty when P is a non-zero constant. Throws <see cref="ArgumentException"/> when P(s; p) is
-    /// the zero polynomial (every s is a root).
+    /// the zero polynomial (every s is a root) or has a coefficient that is not finite, and
+    /// <see cref="ArithmeticException"/> when the root solver does not converge.
     /// </summary>
     public static ImmutableArray<Complex> PolesAt(CharacteristicFamily family, double p)
     {
