@@ -254,4 +254,59 @@ public class LocusFactsTests
         var stable = Assert.Single(facts.StableIntervals);
         Assert.Equal(20.0, stable.To);
     }
+
+    [Fact]
+    public void Triple_pole_is_one_break_point_with_three_branches_and_no_departure_angles()
+    {
+        // K/(s+1)³ (common practice; e.g. Dorf & Bishop, Modern Control Systems, 12th ed., Routh examples, from
+        // memory): s³ + 3s² + 3s + 1 + K, Routh gives 3·3 > 1 + K, so the crossing is at K = 8, ω = √3; for K < 0
+        // the real pole crosses the origin at K = -1. The asymptotes leave -1 at ±60° and 180°.
+        var facts = LocusFacts.Compute(Loops.Descending([1], [1, 3, 3, 1]), -10, 10);
+
+        var triple = Assert.Single(facts.BreakPoints);
+        Assert.Equal(3, triple.Meeting);
+        Assert.Equal(0.0, triple.Value);
+        Assert.Equal(-1.0, triple.Location.Real, 1e-6);
+        Assert.Empty(facts.DepartureAngles);
+        Assert.Equal(2, facts.AxisCrossings.Length);
+        Near(-1.0, facts.AxisCrossings[0].Value, Rel);
+        Assert.Equal(0.0, facts.AxisCrossings[0].Omega);
+        Near(8.0, facts.AxisCrossings[1].Value, Rel);
+        Near(Math.Sqrt(3), facts.AxisCrossings[1].Omega, Rel);
+        var stable = Assert.Single(facts.StableIntervals);
+        Near(-1.0, stable.From, Rel);
+        Near(8.0, stable.To, Rel);
+    }
+
+    [Fact]
+    public void Open_loop_poles_on_the_axis_cross_it_at_zero_gain_when_the_range_spans_zero()
+    {
+        // K(s²+4)/((s²+1)(s+1)): s³ + (1+K)s² + s + (1+4K); Routh: 1+K > 0, 1+4K > 0, (1+K) > 1+4K, so the loop
+        // is stable for -1/4 < K < 0 only (hand calculation). The poles ±j sit on the axis at K = 0 and cross it
+        // there, so K = 0 is listed because it lies inside [-2, 5].
+        var a = Loops.Product([1, 0, 1], [1, 1]);
+        var family = CharacteristicFamily.FromAffine(new AffineSplit(a, Polynomial.FromDescending(1, 0, 4)));
+        var facts = LocusFacts.Compute(family, -2, 5);
+
+        Assert.Contains(facts.AxisCrossings, c => c.Value == 0.0 && Math.Abs(c.Omega - 1) < 1e-9);
+        var stable = Assert.Single(facts.StableIntervals);
+        Near(-0.25, stable.From, Rel);
+        Assert.Equal(0.0, stable.To);
+        Assert.True(RouthReference.IsStrictlyStable(family.At(-0.125)));
+        Assert.False(RouthReference.IsStrictlyStable(family.At(0.125)));
+    }
+
+    [Fact]
+    public void A_pole_hidden_at_the_origin_is_never_stable_and_crosses_nothing()
+    {
+        // K·s/(s(s+1)): the common factor s keeps a pole at the origin for every K, so the constant coefficient is
+        // 0 and the loop is never strictly stable (Routh necessary condition, common practice); that pole sitting
+        // on every boundary through the origin is not a crossing.
+        var family = CharacteristicFamily.FromAffine(new AffineSplit(Polynomial.FromDescending(1, 1, 0), Polynomial.FromDescending(1, 0)));
+        var facts = LocusFacts.Compute(family, 0, 5);
+
+        Assert.Empty(facts.StableIntervals);
+        Assert.Empty(facts.AxisCrossings);
+        Assert.Empty(SpecBoundaries.Find(family, 0, 5, minDamping: 0.5));
+    }
 }
