@@ -40,6 +40,24 @@ public sealed record Plant(
     public Parameter SweptParameter => FindParameter(Loop.Sweep)
         ?? throw new InvalidOperationException($"Swept parameter '{Loop.Sweep}' is not defined.");
 
+    /// <summary>
+    /// The span the locus is traced over: the swept parameter's <see cref="Parameter.Range"/>, or, when the file gives
+    /// none, from 0 to twice its nominal value ([2·value, 0] for a negative value, [0, 1] for zero).
+    /// </summary>
+    public Interval SweepRange
+    {
+        get
+        {
+            var swept = SweptParameter;
+            return swept.Range ?? swept.Value switch
+            {
+                > 0 => new Interval(0, 2 * swept.Value),
+                < 0 => new Interval(2 * swept.Value, 0),
+                _ => new Interval(0, 1),
+            };
+        }
+    }
+
     /// <summary>Every parameter's nominal <see cref="Parameter.Value"/>, by name.</summary>
     public ImmutableDictionary<string, double> NominalValues() =>
         Parameters.ToImmutableDictionary(p => p.Name, p => p.Value, StringComparer.Ordinal);

@@ -1,0 +1,155 @@
+using System.Collections.Immutable;
+using System.Numerics;
+using TermLocus.Core.Algebra;
+using TermLocus.Core.Analysis;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.App.Workbench;
+
+/// <summary>
+/// The one place where the workbench calls the computation and file components (plant files, loop model, roots,
+/// spec checks, locus tracing and facts, saving). Everything else in the workbench sees only its own records.
+/// </summary>
+internal static class CoreBridge
+{
+    /// <summary>The closed-loop poles at <paramref name="value"/> and the specs they miss. Pure and cheap.</summary>
+    public static PoleSnapshot PolesAt(LoadedPlant loaded, double value)
+    {
+        ImmutableArray<Complex> poles;
+        try
+        {
+            poles = LocusTracer.PolesAt(loaded.Family, value);
+        }
+        catch (PlantFileException e)
+        {
+            return new PoleSnapshot(value, [], [], "the loop cannot be formed here: " + e.Error.Message);
+        }
+        catch (ArgumentException)
+        {
+            return new PoleSnapshot(value, [], [], "the characteristic polynomial vanishes here (every s is a root)");
+        }
+
+        return new PoleSnapshot(value, poles, Misses(loaded.Plant.Specs, poles));
+    }
+
+    /// <summary>Every spec the poles miss, worst relative margin first.</summary>
+    public static ImmutableArray<SpecMiss> Misses(Specs specs, ImmutableArray<Complex> poles) =>
+        SpecCheck.Evaluate(specs, poles).Violations
+            .Select(v => new SpecMiss(v.Key, v.Limit, v.Actual, v.Margin, v.Pole))
+            .OrderBy(m => m.RelativeMargin)
+            .ToImmutableArray();
+
+    /// <summary>Reads a plant file and builds its loop at the nominal values. Throws <see cref="PlantFileException"/>.</summary>
+    public static LoadedPlant Load(string path) => Build(PlantFileReader.ReadDocument(path));
+
+    /// <summary>Every plant file of <paramref name="folder"/> with its verdict at its saved values.</summary>
+    public static ImmutableArray<LibraryItem> ScanLibrary(string folder) =>
+        PlantLibrary.Scan(folder).AsParallel().AsOrdered().Select(Item).ToImmutableArray();
+
+    /// <summary>The locus over the plant's range and the swept values worth jumping to.</summary>
+    public static LocusAnalysis Trace(LoadedPlant loaded, TraceKey key)
+    {
+        var family = loaded.Family;
+        var (from, to) = (loaded.Range.Low, loaded.Range.High);
+        var trace = LocusTracer.Trace(family, from, to);
+        var facts = LocusFacts.Compute(family, from, to);
+        var specs = loaded.Plant.Specs;
+        double? zeta = specs.MinDamping is double z ? Math.Clamp(z, -1 + 1e-12, 1) : null;
+        var boundaries = SpecBoundaries.Find(
+            family, trace, zeta, SpecCheck.RequiredDecayRate(specs), specs.MinNaturalFrequency, specs.MaxNaturalFrequency);
+        var marks = boundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, KeyOf(b.Spec, specs)))
+            .Concat(facts.AxisCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
+            .Concat(facts.BreakPoints.Select(b => new SweepMark(b.Value, SweepMarkKind.BreakPoint, null)))
+            .OrderBy(m => m.Value)
+            .ToImmutableArray();
+        return new LocusAnalysis(key, trace.Branches.Select(b => b.Points).ToImmutableArray(), marks);
+    }
+
+    /// <summary>Writes the value and an operating point into the plant file; returns the file as now on disk.</summary>
+    /// <exception cref="IOException">The save was refused or failed (the message says why); the file is unchanged.</exception>
+    public static PlantDocument SaveOperatingPoint(LoadedPlant loaded, double value, string verdict, SaveContext context)
+    {
+        var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
+        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context));
+        var result = AtomicFileSaver.TrySave(document, bytes);
+        if (!result.Succeeded)
+        {
+            throw new IOException(result.Message);
+        }
+
+        return PlantFileReader.ReadDocument(document.Path);
+    }
+
+    /// <summary>Writes what saving would write to <c>&lt;plant&gt;.recovery</c>; the plant file is not touched.</summary>
+    public static string WriteRecovery(LoadedPlant loaded, double value, string verdict, SaveContext context)
+    {
+        var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
+        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context));
+        string target = SaveRecoveryEffect.RecoveryPathFor(document.Path);
+        string temporary = target + ".tmp";
+        File.WriteAllBytes(temporary, bytes);
+        File.Move(temporary, target, overwrite: true);
+        return target;
+    }
+
+    private static LoadedPlant Build(PlantDocument document)
+    {
+        var plant = document.Plant;
+        var model = LoopModel.Create(plant);
+        var family = model.Family(plant.Loop.Sweep, plant.NominalValues());
+        var range = plant.SweptParameter.Range ?? LocusTracer.AutomaticRange(family);
+        var split = family.Affine;
+        return new LoadedPlant(plant, family, range, Roots(split?.A), Roots(split?.B), document, model);
+    }
+
+    private static ImmutableArray<Complex> Roots(Polynomial? p) =>
+        p is null || p.Degree < 1 ? [] : [.. PolynomialRoots.Find(p)];
+
+    private static LibraryItem Item(PlantLibraryEntry entry)
+    {
+        if (entry.Plant is not { } plant)
+        {
+            return new LibraryItem(entry.Path, entry.FileName, null, LibraryVerdict.Error, entry.Error?.ToString());
+        }
+
+        try
+        {
+            var model = LoopModel.Create(plant);
+            var poles = LocusTracer.PolesAt(model.Family(plant.Loop.Sweep, plant.NominalValues()), plant.SweptParameter.Value);
+            var misses = Misses(plant.Specs, poles);
+            bool unstable = poles.Any(p => p.Real > 0);
+            var verdict = misses.IsEmpty && !unstable ? LibraryVerdict.Pass : LibraryVerdict.Fail;
+            string? problem = misses.IsEmpty ? (unstable ? "unstable" : null) : misses[0].SpecKey;
+            return new LibraryItem(entry.Path, entry.FileName, entry.Title, verdict, problem);
+        }
+        catch (Exception e) when (e is PlantFileException or ArgumentException)
+        {
+            string problem = e is PlantFileException p ? p.Error.ToString() : $"{entry.FileName}: error: {e.Message}";
+            return new LibraryItem(entry.Path, entry.FileName, entry.Title, LibraryVerdict.Error, problem);
+        }
+    }
+
+    private static Core.Plants.OperatingPointRecord Record(LoadedPlant loaded, double value, string verdict, SaveContext context)
+    {
+        string name = loaded.Plant.Loop.Sweep;
+        return new OperatingPointRecord(
+            $"{name} = {Text.NumberText.Exact(value)}",
+            context.Now(),
+            context.By,
+            [new KeyValuePair<string, double>(name, value)],
+            verdict,
+            "saved from the workbench");
+    }
+
+    // The decay boundary is drawn at the strictest of the three decay-type limits; name the one that sets it.
+    private static string KeyOf(SpecBoundaryKind kind, Specs specs) => kind switch
+    {
+        SpecBoundaryKind.MinDamping => SpecKind.MinDamping.Key(),
+        SpecBoundaryKind.MinNaturalFrequency => SpecKind.MinNaturalFrequency.Key(),
+        SpecBoundaryKind.MaxNaturalFrequency => SpecKind.MaxNaturalFrequency.Key(),
+        SpecBoundaryKind.MinDecayRate => SpecCheck.Limits(specs)
+            .Where(l => l.Spec is SpecKind.MinDecayRate or SpecKind.MaxTimeToHalf or SpecKind.MaxSettlingTime)
+            .MaxBy(l => SpecCheck.EquivalentDecayRate(l.Spec, l.Limit)).Spec.Key(),
+        _ => kind.ToString(),
+    };
+}

@@ -1,0 +1,93 @@
+using TermLocus.Core.Plants;
+
+namespace TermLocus.App.Workbench;
+
+/// <summary>
+/// Performs one effect and says what came of it as a message. Blocking: the terminal layer runs it off the UI thread
+/// and posts the message back; tests run it in line. Expected failures become failure messages, never exceptions.
+/// </summary>
+public sealed class EffectWorker(SaveContext saveContext)
+{
+    /// <summary>The outcome of <paramref name="effect"/>, or null when it has none (quitting, the recovery file).</summary>
+    public Message? Perform(Effect effect) => effect switch
+    {
+        LoadPlantEffect e => Load(e.Path),
+        ScanLibraryEffect e => Scan(e.Folder),
+        TraceLocusEffect e => Trace(e),
+        SaveOperatingPointEffect e => Save(e),
+        SaveRecoveryEffect e => WriteRecovery(e),
+        QuitEffect => null,
+        _ => throw new ArgumentOutOfRangeException(nameof(effect), effect, "unknown effect"),
+    };
+
+    private static Message Load(string path)
+    {
+        try
+        {
+            return new PlantLoaded(CoreBridge.Load(path));
+        }
+        catch (PlantFileException e)
+        {
+            return new PlantLoadFailed(path, e.Error.ToString());
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
+        {
+            return new PlantLoadFailed(path, $"{path}: error: {e.Message}");
+        }
+    }
+
+    private static Message Scan(string folder)
+    {
+        try
+        {
+            return new LibraryScanned(folder, CoreBridge.ScanLibrary(folder));
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            return new LibraryScanned(folder, [], $"cannot read the library folder {folder}: {e.Message}");
+        }
+    }
+
+    private static Message Trace(TraceLocusEffect e)
+    {
+        try
+        {
+            return new LocusTraced(CoreBridge.Trace(e.Loaded, e.Key));
+        }
+        catch (Exception ex) when (ex is ArithmeticException or ArgumentException or InvalidOperationException or PlantFileException)
+        {
+            return new LocusTraceFailed(e.Key, ex.Message);
+        }
+    }
+
+    private Message Save(SaveOperatingPointEffect e)
+    {
+        try
+        {
+            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext);
+            return new OperatingPointSaved(saved.Plant, saved, e.Value, e.QuitAfter);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException)
+        {
+            return new OperatingPointSaveFailed(ex.Message);
+        }
+        catch (PlantFileException ex)
+        {
+            return new OperatingPointSaveFailed(ex.Error.ToString());
+        }
+    }
+
+    private Message? WriteRecovery(SaveRecoveryEffect e)
+    {
+        try
+        {
+            CoreBridge.WriteRecovery(e.Loaded, e.Value, e.Verdict, saveContext);
+            return null;
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or PlantFileException)
+        {
+            // On the way out there is nobody to tell but the report printed after the terminal is restored.
+            return new OperatingPointSaveFailed("recovery file not written: " + ex.Message);
+        }
+    }
+}

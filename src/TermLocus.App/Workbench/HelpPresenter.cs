@@ -1,0 +1,85 @@
+using System.Collections.Immutable;
+using TermLocus.App.Text;
+
+namespace TermLocus.App.Workbench;
+
+#pragma warning disable CS8524 // every named value is handled; see Update.
+
+/// <summary>The help text, generated from the key table, ending with the caution about models and real hardware.</summary>
+public static class HelpPresenter
+{
+    /// <summary>The narrowest width help is laid out for.</summary>
+    public const int MinimumWidth = 40;
+
+    /// <summary>The caution every user must see.</summary>
+    public const string Caution =
+        "Caution: TermLocus computes with the model you give it. A model's results are no substitute for a safe " +
+        "commissioning procedure on the real hardware, for local codes and regulations, or for licensed engineering " +
+        "practice. Step gains on live equipment only with limits, guards and an emergency stop in place.";
+
+    private const int KeyColumn = 20;
+
+    /// <summary>The scopes in the order help lists them.</summary>
+    public static ImmutableArray<Scope> ScopeOrder { get; } =
+        [Scope.Main, Scope.PlanePane, Scope.PolesPane, Scope.Library, Scope.ValueEntry, Scope.QuitConfirm, Scope.Help, Scope.Everywhere];
+
+    /// <summary>The most lines help can have (at <see cref="MinimumWidth"/>); scrolling stops there.</summary>
+    public static int LineCount { get; } = Lines(Glyphs.Unicode, MinimumWidth).Length;
+
+    /// <summary>Every help line, none wider than <paramref name="width"/> (at least <see cref="MinimumWidth"/>).</summary>
+    public static ImmutableArray<string> Lines(Glyphs glyphs, int width)
+    {
+        width = Math.Max(width, MinimumWidth);
+        var lines = ImmutableArray.CreateBuilder<string>();
+        lines.Add("Keys (plain keys only; Shift, Ctrl and Alt are never needed with an arrow)");
+        foreach (var scope in ScopeOrder)
+        {
+            lines.Add(string.Empty);
+            lines.Add(ScopeTitle(scope));
+            foreach (var command in KeyMap.Bindings.Where(b => b.Scope == scope).Select(b => b.Command).Distinct())
+            {
+                var bindings = KeyMap.Bindings.Where(b => b.Scope == scope && b.Command == command).ToList();
+                string keys = string.Join("  ", bindings.Select(b => b.Key.Name(glyphs)));
+                lines.Add("  " + TextWidth.PadRight(keys, Math.Max(KeyColumn - 2, TextWidth.Of(keys) + 2)) + bindings[0].Description);
+            }
+        }
+
+        lines.Add(string.Empty);
+        lines.AddRange(Wrap(Caution, width));
+        return lines.Select(l => TextWidth.Of(l) > width ? TextWidth.Cut(l, width) : l).ToImmutableArray();
+    }
+
+    /// <summary>A heading for each scope.</summary>
+    public static string ScopeTitle(Scope scope) => scope switch
+    {
+        Scope.Main => "Main screen",
+        Scope.PlanePane => "When the s-plane has focus (Tab)",
+        Scope.PolesPane => "When the pole table has focus (Tab)",
+        Scope.Library => "Plant library (o)",
+        Scope.ValueEntry => "Value box (=): type a number such as 1.25 or 4.7e-3",
+        Scope.QuitConfirm => "Quit question (asked when the value is unsaved)",
+        Scope.Help => "Help (?)",
+        Scope.Everywhere => "Everywhere",
+    };
+
+    /// <summary>Words of <paramref name="text"/> wrapped to lines of at most <paramref name="width"/> columns.</summary>
+    public static IEnumerable<string> Wrap(string text, int width)
+    {
+        var line = new System.Text.StringBuilder();
+        foreach (var word in text.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+        {
+            if (line.Length > 0 && line.Length + 1 + word.Length > width)
+            {
+                yield return line.ToString();
+                line.Clear();
+            }
+
+            line.Append(line.Length > 0 ? " " : string.Empty).Append(word);
+        }
+
+        if (line.Length > 0)
+        {
+            yield return line.ToString();
+        }
+    }
+}

@@ -1,0 +1,71 @@
+using System.Collections.Immutable;
+using TermLocus.App.Canvas;
+using TermLocus.App.Plot;
+using TermLocus.App.Text;
+
+namespace TermLocus.App.Workbench;
+
+/// <summary>The text of the small boxes and screens: the value box, the quit question, the too-small screen, the legend.</summary>
+public static class OverlayPresenter
+{
+    /// <summary>The value box: what to type, the text so far with a cursor, the last problem.</summary>
+    public static ImmutableArray<string> ValueEntry(WorkbenchState state, ValueEntryOverlay entry, int width, Glyphs glyphs)
+    {
+        var lines = new List<string>();
+        if (state.Session is { } session)
+        {
+            var sweep = session.Sweep;
+            lines.Add($"New value for {sweep.Name}" + (sweep.Unit.Length > 0 ? $" ({SafeText.Visible(sweep.Unit)})" : string.Empty));
+            lines.Add($"range {NumberText.Exact(sweep.Range.Low)} to {NumberText.Exact(sweep.Range.High)}, now {NumberText.Exact(sweep.Value)}");
+        }
+
+        lines.Add(string.Empty);
+        lines.Add("> " + SafeText.Visible(entry.Text) + "_");
+        lines.Add(entry.Problem is null ? string.Empty : glyphs.Violated + " " + entry.Problem);
+        return Fit(lines, width, glyphs);
+    }
+
+    /// <summary>The quit question: which value is unsaved, how it fares, and the three answers.</summary>
+    public static ImmutableArray<string> QuitConfirm(WorkbenchState state, int width, Glyphs glyphs)
+    {
+        var lines = new List<string>();
+        if (state.Session is { } session)
+        {
+            var sweep = session.Sweep;
+            string file = SafeText.Visible(Path.GetFileName(session.Loaded.Plant.Path));
+            lines.Add($"{sweep.Name} = {NumberText.Exact(sweep.Value)} is not saved in {file}");
+            lines.Add($"(the file has {NumberText.Exact(sweep.SavedValue)}); it {SpecWording.Verdict(session.Poles, glyphs)}.");
+        }
+
+        lines.Add(string.Empty);
+        lines.Add(KeyHints.Line(state with { Overlay = new QuitConfirmOverlay() }, width, glyphs));
+        return Fit(lines, width, glyphs);
+    }
+
+    /// <summary>The whole screen when the terminal is below the minimum size; q (and the quit question) still work.</summary>
+    public static ImmutableArray<string> TooSmall(WorkbenchState state, int width, int height, Glyphs glyphs)
+    {
+        var lines = new List<string>
+        {
+            $"TermLocus needs at least {ScreenLayout.MinimumWidth}x{ScreenLayout.MinimumHeight}, have {width}x{height}.",
+            "Make the window larger, or press q to quit.",
+        };
+        if (state.Overlay is QuitConfirmOverlay)
+        {
+            lines.Add(string.Empty);
+            lines.AddRange(QuitConfirm(state, width, glyphs));
+        }
+
+        var wrapped = lines.SelectMany(l => l.Length == 0 ? [string.Empty] : HelpPresenter.Wrap(l, Math.Max(1, width)));
+        return wrapped.Take(Math.Max(0, height)).Select(l => TextWidth.PadRight(TextWidth.Cut(l, width), width)).ToImmutableArray();
+    }
+
+    /// <summary>The key to the plane's marks, one item a line (for the roomy side column).</summary>
+    public static ImmutableArray<string> LegendLines(CanvasSymbols symbols, int width) =>
+        PlaneLegend.Line(symbols).Split("  ", StringSplitOptions.RemoveEmptyEntries)
+            .Select(item => TextWidth.PadRight(TextWidth.Cut(item, width), width))
+            .ToImmutableArray();
+
+    private static ImmutableArray<string> Fit(IEnumerable<string> lines, int width, Glyphs glyphs) =>
+        lines.Select(l => TextWidth.PadRight(SafeText.Fit(l, width, glyphs.Ellipsis), width)).ToImmutableArray();
+}

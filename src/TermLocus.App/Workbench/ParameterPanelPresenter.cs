@@ -1,0 +1,104 @@
+using System.Collections.Immutable;
+using TermLocus.App.Text;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.App.Workbench;
+
+/// <summary>
+/// The parameter panel: the plant's title, the swept parameter with its value and unit, the step, whether the value
+/// is saved, where it stands in its range as a small bar, then (given room) the file, the specs and the note.
+/// Short lines, most important first, so a narrow side panel shows what matters.
+/// </summary>
+public static class ParameterPanelPresenter
+{
+    /// <summary>At most <paramref name="height"/> lines of exactly <paramref name="width"/> columns.</summary>
+    public static ImmutableArray<string> Lines(PlantSession? session, int width, int height, Glyphs glyphs)
+    {
+        var lines = new List<string>();
+        if (session is null)
+        {
+            lines.Add("no plant open");
+            lines.Add("o opens the library");
+            lines.Add("? shows the keys");
+        }
+        else
+        {
+            var plant = session.Loaded.Plant;
+            var sweep = session.Sweep;
+            lines.Add(plant.Title.Length > 0 ? SafeText.Visible(plant.Title) : SafeText.Visible(Path.GetFileName(plant.Path)));
+            lines.Add(ValueLine(sweep));
+            lines.Add("step " + NumberText.Exact(sweep.Step));
+            lines.Add(sweep.Unsaved ? $"{glyphs.Violated} unsaved (file: {NumberText.Exact(sweep.SavedValue)})" : "saved in the file");
+            lines.Add(Bar(sweep, width, glyphs));
+            lines.Add("file: " + SafeText.Visible(Path.GetFileName(plant.Path)));
+            lines.AddRange(SpecLines(plant.Specs, width, glyphs));
+            if (plant.Note.Length > 0)
+            {
+                lines.AddRange(HelpPresenter.Wrap(SafeText.Visible(plant.Note), Math.Max(1, width)));
+            }
+        }
+
+        return lines.Take(Math.Max(0, height))
+            .Select(l => TextWidth.PadRight(SafeText.Fit(l, width, glyphs.Ellipsis), width))
+            .ToImmutableArray();
+    }
+
+    /// <summary>"Kc = 1.2 A/(rad/s)".</summary>
+    public static string ValueLine(SweepState sweep)
+    {
+        string unit = sweep.Unit.Length > 0 ? " " + SafeText.Visible(sweep.Unit) : string.Empty;
+        return $"{sweep.Name} = {NumberText.Exact(sweep.Value)}{unit}";
+    }
+
+    /// <summary>"0 ───●······· 20": the range ends and the value's place between them.</summary>
+    public static string Bar(SweepState sweep, int width, Glyphs glyphs)
+    {
+        string low = NumberText.Exact(sweep.Range.Low);
+        string high = NumberText.Exact(sweep.Range.High);
+        int barWidth = Math.Min(width - low.Length - high.Length - 2, 40);
+        if (barWidth < 3)
+        {
+            return $"{low}..{high}";
+        }
+
+        int at = (int)Math.Round(sweep.Position * (barWidth - 1));
+        string bar = string.Concat(Enumerable.Repeat(glyphs.BarFilled, at)) + glyphs.BarMarker
+            + string.Concat(Enumerable.Repeat(glyphs.BarEmpty, barWidth - at - 1));
+        return $"{low} {bar} {high}";
+    }
+
+    /// <summary>"specs: ζ ≥ 0.6  t½ ≤ 0.05 s" on one line when it fits, else one spec a line.</summary>
+    public static IEnumerable<string> SpecLines(Specs specs, int width, Glyphs g)
+    {
+        var parts = SpecParts(specs, g);
+        if (parts.Count == 0)
+        {
+            return ["specs: none"];
+        }
+
+        string one = "specs: " + string.Join("  ", parts);
+        return TextWidth.Of(one) <= width ? [one] : ["specs:", .. parts.Select(p => "  " + p)];
+    }
+
+    /// <summary>Each limit of <paramref name="specs"/> as "ζ ≥ 0.6", "t½ ≤ 0.05 s", in a fixed order.</summary>
+    public static List<string> SpecParts(Specs specs, Glyphs g)
+    {
+        var parts = new List<string>();
+        void Add(double? limit, string figure, string relation, string unit)
+        {
+            if (limit is double v)
+            {
+                parts.Add($"{figure} {relation} {NumberText.Exact(v)}{unit}");
+            }
+        }
+
+        Add(specs.MinDamping, g.Zeta, g.AtLeast, string.Empty);
+        Add(specs.MinDecayRate, g.DecayRate, g.AtLeast, " 1/s");
+        Add(specs.MaxTimeToHalfSeconds, g.TimeToHalf, g.AtMost, " s");
+        Add(specs.MaxSettlingTimeSeconds, "settling", g.AtMost, " s");
+        Add(specs.MinNaturalFrequency, g.NaturalFrequency, g.AtLeast, " rad/s");
+        Add(specs.MaxNaturalFrequency, g.NaturalFrequency, g.AtMost, " rad/s");
+        Add(specs.MaxOvershootPct, "overshoot", g.AtMost, " %");
+        return parts;
+    }
+}

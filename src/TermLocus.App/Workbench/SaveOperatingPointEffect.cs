@@ -1,0 +1,12 @@
+namespace TermLocus.App.Workbench;
+
+/// <summary>
+/// Write the swept value into the plant file as its value and as a new operating point, atomically, refusing when
+/// the file changed on disk since it was read; answers <see cref="OperatingPointSaved"/> or
+/// <see cref="OperatingPointSaveFailed"/>.
+/// </summary>
+/// <param name="Loaded">The plant as read (with the file's bytes and hash).</param>
+/// <param name="Value">The swept value to save.</param>
+/// <param name="Verdict">One line saying how the value fares against the specs.</param>
+/// <param name="QuitAfter">Quit once saved (the answer to the quit question).</param>
+public sealed record SaveOperatingPointEffect(LoadedPlant Loaded, double Value, string Verdict, bool QuitAfter) : Effect;

@@ -1,0 +1,14 @@
+namespace TermLocus.App.Workbench;
+
+/// <summary>
+/// On an abrupt exit, write what saving would have written to <c>&lt;plant file&gt;.recovery</c> beside the plant
+/// file, leaving the plant file itself alone. No answer unless it fails: the program is on its way out.
+/// </summary>
+/// <param name="Loaded">The plant as read (with the file's bytes).</param>
+/// <param name="Value">The unsaved swept value.</param>
+/// <param name="Verdict">One line saying how the value fares against the specs.</param>
+public sealed record SaveRecoveryEffect(LoadedPlant Loaded, double Value, string Verdict) : Effect
+{
+    /// <summary>The recovery file for <paramref name="plantPath"/>.</summary>
+    public static string RecoveryPathFor(string plantPath) => plantPath + ".recovery";
+}

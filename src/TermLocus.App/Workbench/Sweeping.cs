@@ -1,0 +1,138 @@
+using System.Collections.Immutable;
+using TermLocus.App.Text;
+
+namespace TermLocus.App.Workbench;
+
+/// <summary>Commands that move the swept value. Only the poles at the new value are recomputed; the trace stays.</summary>
+internal static class Sweeping
+{
+    // Marks closer than this fraction of the range to the current value count as "here", not "next".
+    private const double MarkTolerance = 1e-9;
+
+    public static (WorkbenchState, ImmutableArray<Effect>) Step(WorkbenchState s, int direction)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var sweep = session.Sweep;
+        double target = StepSeries.Next(sweep.Value, sweep.Step, direction);
+        bool wasInside = sweep.Range.Contains(sweep.Value);
+        if (wasInside)
+        {
+            target = Math.Clamp(target, sweep.Range.Low, sweep.Range.High);
+        }
+
+        if (target == sweep.Value)
+        {
+            string end = direction < 0 ? "start" : "end";
+            return Update.Say(s, StatusMessage.Warning(
+                $"at the {end} of the range of {sweep.Name} ({NumberText.Exact(target)})"));
+        }
+
+        return SetValue(s, target, null);
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ChangeStep(WorkbenchState s, bool finer)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var sweep = session.Sweep;
+        double step = finer ? StepSeries.Finer(sweep.Step, sweep.Range.Width) : StepSeries.Coarser(sweep.Step, sweep.Range.Width);
+        if (step == sweep.Step)
+        {
+            return Update.Say(s, StatusMessage.Warning(finer ? "this is the finest step" : "this is the coarsest step"));
+        }
+
+        return Update.Done(s with { Session = session with { Sweep = sweep with { Step = step } } });
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ToRangeEnd(WorkbenchState s, bool atStart)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var range = session.Sweep.Range;
+        return SetValue(s, atStart ? range.Low : range.High, null);
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ToMark(WorkbenchState s, int direction)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        if (session.Locus is not { } locus)
+        {
+            return Update.Say(s, StatusMessage.Warning("the locus is still being traced"));
+        }
+
+        double value = session.Sweep.Value;
+        double tolerance = MarkTolerance * Math.Max(session.Sweep.Range.Width, Math.Abs(value));
+        SweepMark? mark = direction > 0
+            ? locus.Marks.Where(m => m.Value > value + tolerance).MinBy(m => m.Value)
+            : locus.Marks.Where(m => m.Value < value - tolerance).MaxBy(m => m.Value);
+        if (mark is null)
+        {
+            string where = direction > 0 ? "above" : "below";
+            return Update.Say(s, StatusMessage.Info(
+                $"no spec boundary or crossing {where} {session.Sweep.Name} = {NumberText.Exact(value)} in the range"));
+        }
+
+        return SetValue(s, mark.Value, StatusMessage.Info(
+            $"{SpecWording.DescribeMark(mark)} at {session.Sweep.Name} = {NumberText.Short(mark.Value)}"));
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) Revert(WorkbenchState s)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var sweep = session.Sweep;
+        return SetValue(s, sweep.SavedValue, StatusMessage.Info(
+            $"back to the saved value {sweep.Name} = {NumberText.Exact(sweep.SavedValue)}"));
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) Pick(WorkbenchState s, double value)
+    {
+        if (s.Session is not { } session || !double.IsFinite(value))
+        {
+            return Update.Done(s);
+        }
+
+        double rounded = StepSeries.Round(value, session.Sweep.Step / 10);
+        return SetValue(s, rounded, StatusMessage.Info($"picked {session.Sweep.Name} = {NumberText.Exact(rounded)} on the plane"));
+    }
+
+    /// <summary>Sets the swept value and recomputes the poles there (not the trace).</summary>
+    public static (WorkbenchState, ImmutableArray<Effect>) SetValue(WorkbenchState s, double value, StatusMessage? message)
+    {
+        var session = s.Session!;
+        var sweep = session.Sweep with { Value = value };
+        var poles = CoreBridge.PolesAt(session.Loaded, value);
+        int rows = PoleRows.Group(poles.Poles).Length;
+        var updated = session with
+        {
+            Sweep = sweep,
+            Poles = poles,
+            SelectedPole = Math.Clamp(session.SelectedPole, 0, Math.Max(0, rows - 1)),
+        };
+        if (message is null && !sweep.Range.Contains(value))
+        {
+            message = StatusMessage.Warning(
+                $"{sweep.Name} = {NumberText.Exact(value)} is outside the traced range " +
+                $"[{NumberText.Exact(sweep.Range.Low)}, {NumberText.Exact(sweep.Range.High)}]");
+        }
+
+        return Update.Done(s with { Session = updated, Message = message ?? s.Message });
+    }
+}

@@ -1,0 +1,8 @@
+namespace TermLocus.Cli;
+
+/// <summary>Every headless verb, in the order --help lists them.</summary>
+internal static class VerbCatalog
+{
+    /// <summary>A fresh instance of each verb.</summary>
+    public static IReadOnlyList<IVerb> All() => [];
+}

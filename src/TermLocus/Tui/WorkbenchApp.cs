@@ -1,0 +1,122 @@
+using TermLocus.App.Canvas;
+using TermLocus.App.Workbench;
+using Terminal.Gui.App;
+using Terminal.Gui.Drivers;
+
+namespace TermLocus.Tui;
+
+/// <summary>
+/// The full-screen workbench, <c>termlocus [PATH]</c>. Restores the terminal on every way out: q, Ctrl+C, an
+/// exception, SIGTERM, SIGHUP; an unsaved chosen value then goes to <c>&lt;plant&gt;.toml.recovery</c> beside the plant.
+/// </summary>
+public static class WorkbenchApp
+{
+    /// <summary>
+    /// Runs the workbench until the user quits; returns the exit code: 0 done, 2 cannot start, 70 internal error,
+    /// 128 + n when ended by signal n (SIGTERM, SIGINT, SIGQUIT; SIGHUP ends the process by its default action).
+    /// </summary>
+    /// <param name="options">What to open and how to draw.</param>
+    /// <param name="stderr">Where start-up problems and crash reports go (after the terminal is restored).</param>
+    public static int Run(WorkbenchOptions options, TextWriter stderr)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        ArgumentNullException.ThrowIfNull(stderr);
+        var environment = Environment.GetEnvironmentVariables()
+            .Cast<System.Collections.DictionaryEntry>()
+            .ToDictionary(e => (string)e.Key, e => (string?)e.Value, StringComparer.Ordinal);
+        if (StartProblem(options, environment) is { } problem)
+        {
+            stderr.WriteLine("termlocus: error: " + problem);
+            return 2;
+        }
+
+        var (plantFile, folder, missing) = LibraryLocator.Resolve(options.Path, Environment.CurrentDirectory, AppContext.BaseDirectory);
+        if (missing is not null)
+        {
+            stderr.WriteLine("termlocus: error: " + missing);
+            return 2;
+        }
+
+        var symbols = SymbolChoice.Detect(environment, options.Symbols);
+        bool colour = !options.NoColor && string.IsNullOrEmpty(environment.GetValueOrDefault("NO_COLOR"));
+        var (crash, signalExit) = RunScreen(plantFile, folder, symbols, colour, options.NoMouse);
+        if (crash is not null)
+        {
+            stderr.WriteLine($"termlocus: internal error: {crash.GetType().Name}: {crash.Message}");
+            stderr.WriteLine(crash.StackTrace);
+            return 70;
+        }
+
+        return signalExit;
+    }
+
+    private static string? StartProblem(WorkbenchOptions options, IReadOnlyDictionary<string, string?> environment)
+    {
+        if (!SymbolChoice.TryParseRequest(options.Symbols, out _))
+        {
+            return $"--symbols must be braille or ascii, not '{options.Symbols}'";
+        }
+
+        if (Console.IsInputRedirected || Console.IsOutputRedirected)
+        {
+            return "the workbench needs a terminal; for scripts use a verb such as 'termlocus check' (see termlocus --help)";
+        }
+
+        string term = environment.GetValueOrDefault("TERM") ?? string.Empty;
+        if (term == "dumb")
+        {
+            return "TERM=dumb cannot draw the workbench; use a verb such as 'termlocus check', or set TERM (e.g. xterm-256color)";
+        }
+
+        return null;
+    }
+
+    // Everything that touches the terminal lives here, so that it is restored (by disposing the application) before
+    // anything is printed.
+    private static (Exception? Crash, int ExitCode) RunScreen(string? plantFile, string? folder, CanvasSymbols symbols, bool colour, bool noMouse)
+    {
+        int exitCode = 0;
+        var (state, effects) = Update.Start(plantFile, folder);
+        var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UtcNow, $"{Environment.UserName}@{Environment.MachineName}"));
+        using IApplication app = Application.Create();
+        app.Mouse.IsMouseDisabled = noMouse;
+        app.Init(DriverRegistry.Names.ANSI);
+        if (app.Driver is { } driver)
+        {
+            // Conservative colour depth: SSH and tmux rarely pass COLORTERM; we only use the 16 ANSI colours anyway.
+            driver.Force16Colors = true;
+        }
+
+        var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
+        using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);
+        KeyRouter.Install(app, controller, screen);
+        using var signals = new SignalGuard(
+            stop: code =>
+            {
+                exitCode = code;
+                app.Invoke(controller.EmergencyExit);
+            },
+            hangUp: () => WriteRecovery(controller.State, worker));
+        controller.Start(effects);
+        try
+        {
+            app.Run(screen);
+            return (null, exitCode);
+        }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            // Keep the user's value before the terminal is restored and the report printed.
+            WriteRecovery(controller.State, worker);
+            return (e, 70);
+        }
+    }
+
+    // The state is immutable, so reading it from another thread is safe; Update decides whether anything is unsaved.
+    private static void WriteRecovery(WorkbenchState state, EffectWorker worker)
+    {
+        foreach (var effect in Update.Apply(state, Command.QuitNow).Effects.OfType<SaveRecoveryEffect>())
+        {
+            worker.Perform(effect);
+        }
+    }
+}

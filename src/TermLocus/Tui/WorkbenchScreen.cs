@@ -1,0 +1,203 @@
+using TermLocus.App.Canvas;
+using TermLocus.App.Text;
+using TermLocus.App.Workbench;
+using Terminal.Gui.Drawing;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+using Attr = Terminal.Gui.Drawing.Attribute;
+using Glyphs = TermLocus.App.Text.Glyphs;
+
+namespace TermLocus.Tui;
+
+/// <summary>
+/// The workbench's one screen: the panes placed by <see cref="ScreenLayout"/>, one overlay box for help, library,
+/// value entry and the quit question, and a message screen below the minimum size. It only draws the current state,
+/// and asks Terminal.Gui to redraw only the panes whose inputs changed.
+/// </summary>
+internal sealed class WorkbenchScreen : Runnable
+{
+    private readonly WorkbenchController controller;
+    private readonly Glyphs glyphs;
+    private readonly PlanePane plane;
+    private readonly TextPane parameters;
+    private readonly TextPane legend;
+    private readonly TextPane library;
+    private readonly TextPane poles;
+    private readonly TextPane status;
+    private readonly TextPane overlay;
+    private readonly TextPane tooSmall;
+    private ScreenLayout layout = ScreenLayout.For(0, 0);
+
+    public WorkbenchScreen(WorkbenchController controller, Palette palette, CanvasSymbols symbols)
+    {
+        this.controller = controller;
+        glyphs = symbols == CanvasSymbols.Braille ? Glyphs.Unicode : Glyphs.Ascii;
+        Width = Dim.Fill();
+        Height = Dim.Fill();
+        BorderStyle = LineStyle.None;
+        SetScheme(new Scheme(new Attr(Color.None, Color.None)));
+
+        plane = Framed(new PlanePane(() => controller.State, controller.Receive, palette, symbols));
+        parameters = Framed(new TextPane(palette, (w, h) => PaneContent.Parameters(State, w, h, glyphs)), "parameter");
+        legend = Framed(new TextPane(palette, (w, _) => PaneContent.Legend(symbols, w)), "legend");
+        library = Framed(new TextPane(palette, (w, h) => PaneContent.Library(State, null, w, h, glyphs)), "library");
+        poles = Framed(new TextPane(palette, (w, h) => PaneContent.Poles(State, w, h, glyphs)));
+        status = new TextPane(palette, (w, _) => PaneContent.Status(State, w, glyphs));
+        overlay = Framed(new TextPane(palette, OverlayContent));
+        tooSmall = new TextPane(palette, (w, h) => PaneContent.TooSmall(State, w, h, glyphs));
+        Add(plane, parameters, legend, library, poles, status, overlay, tooSmall);
+        controller.StateChanged += OnStateChanged;
+        UpdateTitles(State);
+    }
+
+    private WorkbenchState State => controller.State;
+
+    /// <summary>The layout in use (for tests and the mouse).</summary>
+    public ScreenLayout CurrentLayout => layout;
+
+    protected override void OnSubViewLayout(LayoutEventArgs args)
+    {
+        var next = ScreenLayout.For(Viewport.Width, Viewport.Height);
+        if (next != layout)
+        {
+            layout = next;
+            Place();
+        }
+
+        base.OnSubViewLayout(args);
+    }
+
+    private static T Framed<T>(T view, string title = "")
+        where T : View
+    {
+        view.BorderStyle = LineStyle.Single;
+        view.Title = title;
+        return view;
+    }
+
+    private static void PlaceAt(View view, Box box)
+    {
+        view.Visible = !box.IsEmpty;
+        if (!box.IsEmpty)
+        {
+            view.X = box.X;
+            view.Y = box.Y;
+            view.Width = box.Width;
+            view.Height = box.Height;
+        }
+    }
+
+    private void Place()
+    {
+        bool small = layout.Mode == LayoutMode.TooSmall;
+        PlaceAt(plane, layout.Plane);
+        PlaceAt(parameters, layout.Parameters);
+        PlaceAt(legend, layout.Legend);
+        PlaceAt(library, layout.Library);
+        PlaceAt(poles, layout.Poles);
+        PlaceAt(status, layout.Status);
+        PlaceAt(tooSmall, small ? layout.Screen : Box.Empty);
+        plane.ShowsLegend = layout.Mode == LayoutMode.Compact;
+        PlaceOverlay(State);
+        RedrawAll();
+    }
+
+    private void PlaceOverlay(WorkbenchState state)
+    {
+        if (layout.Mode == LayoutMode.TooSmall)
+        {
+            PlaceAt(overlay, Box.Empty);
+            return;
+        }
+
+        var screen = layout.Screen;
+        Box box = state.Overlay switch
+        {
+            HelpOverlay => layout.OverlayBox(86, screen.Height),
+            LibraryOverlay => layout.OverlayBox(100, state.Library.Items.Length + 4),
+            ValueEntryOverlay => layout.OverlayBox(52, 7),
+            QuitConfirmOverlay => layout.OverlayBox(72, 6),
+            _ => Box.Empty,
+        };
+        PlaceAt(overlay, box);
+    }
+
+    private IReadOnlyList<StyledLine> OverlayContent(int width, int height) => State.Overlay switch
+    {
+        HelpOverlay help => PaneContent.Help(help, width, height, glyphs),
+        LibraryOverlay open => PaneContent.Library(State, open.Selected, width, height, glyphs),
+        ValueEntryOverlay entry => PaneContent.ValueEntry(State, entry, width, glyphs),
+        QuitConfirmOverlay => PaneContent.QuitConfirm(State, width, glyphs),
+        _ => [],
+    };
+
+    private void OnStateChanged(WorkbenchState before, WorkbenchState after)
+    {
+        UpdateTitles(after);
+        if (before.Overlay.GetType() != after.Overlay.GetType()
+            || (after.Overlay is LibraryOverlay && before.Library != after.Library))
+        {
+            PlaceOverlay(after);
+            RedrawAll();
+            return;
+        }
+
+        if (!Equals(PlaneInputs(before), PlaneInputs(after)))
+        {
+            plane.SetNeedsDraw();
+        }
+
+        if (!Equals(ParameterInputs(before), ParameterInputs(after)))
+        {
+            parameters.SetNeedsDraw();
+        }
+
+        if (!Equals(PoleInputs(before), PoleInputs(after)))
+        {
+            poles.SetNeedsDraw();
+        }
+
+        if (before.Library != after.Library || before.Session?.Loaded.Plant.Path != after.Session?.Loaded.Plant.Path)
+        {
+            library.SetNeedsDraw();
+        }
+
+        overlay.SetNeedsDraw();
+        status.SetNeedsDraw();
+        tooSmall.SetNeedsDraw();
+    }
+
+    private static object PlaneInputs(WorkbenchState s) =>
+        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.View, s.Focus, s.Session?.SelectedPole, s.Overlay is NoOverlay);
+
+    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep);
+
+    private static object PoleInputs(WorkbenchState s) =>
+        (s.Session?.Poles, s.Session?.SelectedPole, s.Focus, s.Overlay is NoOverlay);
+
+    private void UpdateTitles(WorkbenchState state)
+    {
+        string mark = glyphs.Selected + " ";
+        string zoom = state.View.ZoomSteps == 0 ? string.Empty : $"  zoom {NumberText.Significant(state.View.ZoomFactor, 3)}x";
+        string tracing = state.Session is { Locus: null } ? "  tracing" + glyphs.Ellipsis : string.Empty;
+        plane.Title = (state.Focus == Pane.Plane ? mark : string.Empty) + "s-plane" + zoom + tracing;
+        poles.Title = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
+        overlay.Title = state.Overlay switch
+        {
+            HelpOverlay => "help (Esc closes)",
+            LibraryOverlay => "plant library",
+            ValueEntryOverlay => "type a value",
+            QuitConfirmOverlay => "quit?",
+            _ => string.Empty,
+        };
+    }
+
+    private void RedrawAll()
+    {
+        SetNeedsDraw();
+        foreach (var view in new View[] { plane, parameters, legend, library, poles, status, overlay, tooSmall })
+        {
+            view.SetNeedsDraw();
+        }
+    }
+}

@@ -1,0 +1,140 @@
+using System.Runtime.CompilerServices;
+using TermLocus.App.Canvas;
+using TermLocus.App.Workbench;
+using TermLocus.Tui;
+using Terminal.Gui.App;
+using Terminal.Gui.Drivers;
+using Terminal.Gui.Input;
+using Terminal.Gui.Testing;
+using Command = TermLocus.App.Workbench.Command;
+
+namespace TermLocus.Tests.Tui;
+
+/// <summary>
+/// The workbench screen on Terminal.Gui's in-process ANSI driver (no real terminal I/O) at a fixed size. Effects are
+/// recorded, not run; tests deliver their outcomes as messages, so every screen is deterministic.
+/// </summary>
+internal sealed class ScreenHarness : IDisposable
+{
+    private readonly IApplication app;
+    private readonly WorkbenchScreen screen;
+    private readonly SessionToken? token;
+
+    private ScreenHarness(int width, int height, CanvasSymbols symbols, bool colour, string? folder)
+    {
+        Environment.SetEnvironmentVariable("DisableRealDriverIO", "1");
+        app = Application.Create();
+        app.Init(DriverRegistry.Names.ANSI);
+        app.Driver!.SetScreenSize(width, height);
+        var (state, _) = Update.Start(null, folder);
+        Controller = new WorkbenchController(state, new InlineEffectRunner(Record), () => Quit = true);
+        screen = new WorkbenchScreen(Controller, Palette.For(colour), symbols);
+        KeyRouter.Install(app, Controller, screen);
+        token = app.Begin(screen);
+        app.LayoutAndDraw();
+    }
+
+    public WorkbenchController Controller { get; }
+
+    public List<Effect> Effects { get; } = [];
+
+    public bool Quit { get; private set; }
+
+    public static ScreenHarness Start(int width, int height, CanvasSymbols symbols = CanvasSymbols.Braille, bool colour = true, string? folder = ScreenPlants.Folder) =>
+        new(width, height, symbols, colour, folder);
+
+    /// <summary>Opens <see cref="ScreenPlants.SecondOrder"/> with its library and traced locus.</summary>
+    public ScreenHarness WithSecondOrder(double k = 2)
+    {
+        var loaded = ScreenPlants.SecondOrder(k);
+        Deliver(new LibraryScanned(ScreenPlants.Folder, ScreenPlants.Library()));
+        Deliver(new PlantLoaded(loaded));
+        Deliver(new LocusTraced(ScreenPlants.SecondOrderLocus(loaded)));
+        Controller.Receive(new ValuePicked(k)); // a no-op value change that clears nothing; keeps the screen stable
+        Controller.Dispatch(Command.Cancel);    // clear the "opened" message
+        app.LayoutAndDraw();
+        return this;
+    }
+
+    public void Deliver(Message message)
+    {
+        Controller.Receive(message);
+        app.LayoutAndDraw();
+    }
+
+    public void Press(params Key[] keys)
+    {
+        foreach (var key in keys)
+        {
+            app.InjectKey(key);
+        }
+
+        app.LayoutAndDraw();
+    }
+
+    public void Type(string text) => Press(text.Select(c => new Key(c)).ToArray());
+
+    public void Resize(int width, int height)
+    {
+        app.Driver!.SetScreenSize(width, height);
+        app.LayoutAndDraw();
+    }
+
+    public string Screen() => app.Driver!.ToString()!;
+
+    /// <summary>The screen with ANSI attributes, for checks that colour is (or is not) sent.</summary>
+    public string Ansi() => app.Driver!.ToAnsi();
+
+    public void Dispose()
+    {
+        if (token is not null)
+        {
+            app.End(token);
+        }
+
+        screen.Dispose();
+        app.Dispose();
+    }
+
+    private Message? Record(Effect effect)
+    {
+        Effects.Add(effect);
+        return null;
+    }
+}
+
+/// <summary>Compares a screen with a stored snapshot; on a mismatch writes <c>NAME.actual</c> beside it.</summary>
+internal static class Snapshot
+{
+    public static void Match(string name, string screen, [CallerFilePath] string callerFile = "")
+    {
+        string folder = Path.Combine(Path.GetDirectoryName(callerFile)!, "Snapshots");
+        string expectedPath = Path.Combine(folder, name + ".txt");
+        string actualPath = Path.Combine(folder, name + ".actual");
+        string actual = Scrub(screen);
+        string? expected = File.Exists(expectedPath) ? File.ReadAllText(expectedPath) : null;
+        if (expected == actual)
+        {
+            if (File.Exists(actualPath))
+            {
+                File.Delete(actualPath);
+            }
+
+            return;
+        }
+
+        File.WriteAllText(actualPath, actual);
+        Assert.Fail(expected is null
+            ? $"no snapshot {expectedPath}; wrote {actualPath} (review it, then rename it to .txt)"
+            : $"screen differs from {expectedPath}; wrote {actualPath}");
+    }
+
+    // Trailing blanks carry no meaning; times and machine paths would make snapshots differ between runs and machines.
+    private static string Scrub(string screen)
+    {
+        var lines = screen.Replace("\r", string.Empty, StringComparison.Ordinal).Split('\n').Select(l => l.TrimEnd());
+        string text = string.Join('\n', lines).TrimEnd('\n') + "\n";
+        text = System.Text.RegularExpressions.Regex.Replace(text, @"\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d+)?Z?", "<time>");
+        return text.Replace(Path.GetTempPath().TrimEnd('/'), "<tmp>", StringComparison.Ordinal);
+    }
+}
