@@ -11,9 +11,6 @@ namespace TermLocus.Tui;
 /// </summary>
 public static class WorkbenchApp
 {
-    // DECRST of the X10/normal/button/any-event tracking modes and the UTF-8, SGR and URXVT coordinate encodings.
-    private const string MouseReportingOff = "\u001b[?1000l\u001b[?1002l\u001b[?1003l\u001b[?1005l\u001b[?1006l\u001b[?1015l";
-
     /// <summary>
     /// Runs the workbench until the user quits; returns the exit code: 0 done, 2 cannot start, 70 internal error,
     /// 128 + n when ended by signal n (SIGTERM, SIGINT, SIGQUIT; SIGHUP ends the process by its default action).
@@ -82,19 +79,8 @@ public static class WorkbenchApp
         var (state, effects) = Update.Start(plantFile, folder);
         var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UtcNow, $"{Environment.UserName}@{Environment.MachineName}"));
         using IApplication app = Application.Create();
-        app.Mouse.IsMouseDisabled = noMouse;
         app.Init(DriverRegistry.Names.ANSI);
-        if (app.Driver is { } driver)
-        {
-            // Conservative colour depth: SSH and tmux rarely pass COLORTERM; we only use the 16 ANSI colours anyway.
-            driver.Force16Colors = true;
-            if (noMouse)
-            {
-                // Terminal.Gui 2.5 turns mouse reporting on even when the mouse is disabled; turn it off again so the
-                // terminal keeps its own select-and-copy.
-                driver.WriteRaw(MouseReportingOff);
-            }
-        }
+        TerminalSetup.Configure(app, noMouse);
 
         var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
         using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);

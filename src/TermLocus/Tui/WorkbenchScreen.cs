@@ -56,6 +56,9 @@ internal sealed class WorkbenchScreen : Runnable
 
     private WorkbenchState State => controller.State;
 
+    /// <summary>How many times the s-plane has been drawn.</summary>
+    public int PlaneDrawCount => plane.DrawCount;
+
     /// <summary>The layout in use (for tests and the mouse).</summary>
     public ScreenLayout CurrentLayout => layout;
 
