@@ -1,6 +1,6 @@
 namespace TermLocus.App.Plot;
 
-/// <summary>Which limit a <see cref="SpecBoundary"/> draws; all are drawn alike, the kind feeds the legend.</summary>
+/// <summary>Which limit a <see cref="BoundaryCurve"/> draws; all are drawn alike, the kind feeds the legend.</summary>
 public enum BoundaryKind
 {
     /// <summary>A damping-ratio (ζ) limit.</summary>

@@ -29,7 +29,7 @@ public static class PlaneRenderer
         double realStep = AxesPainter.RealStep(map.Bounds, canvas.Columns);
         double imaginaryStep = AxesPainter.ImaginaryStep(map.Bounds, canvas.Rows, realStep);
         AxesPainter.DrawLines(canvas, map, realStep, imaginaryStep, options);
-        foreach (SpecBoundary boundary in scene.Boundaries)
+        foreach (BoundaryCurve boundary in scene.Boundaries)
         {
             DrawPolyline(canvas, map, boundary.Points, new CellTag(CellLayer.SpecBoundary), DotPattern.Sparse);
         }

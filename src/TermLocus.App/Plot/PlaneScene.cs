@@ -29,7 +29,7 @@ public sealed record PlaneScene
     public ImmutableArray<CurrentPole> CurrentPoles { get; init; } = [];
 
     /// <summary>Spec limits.</summary>
-    public ImmutableArray<SpecBoundary> Boundaries { get; init; } = [];
+    public ImmutableArray<BoundaryCurve> Boundaries { get; init; } = [];
 
     /// <summary>Cursor or picked points.</summary>
     public ImmutableArray<Complex> Markers { get; init; } = [];
@@ -47,7 +47,7 @@ public sealed record PlaneScene
             .Concat(OpenLoopZeros)
             .Concat(CurrentPoles.Select(p => p.Position))
             .Concat(Markers);
-        foreach (SpecBoundary boundary in Boundaries)
+        foreach (BoundaryCurve boundary in Boundaries)
         {
             if (boundary.Kind is BoundaryKind.NaturalFrequency or BoundaryKind.UnitCircle)
             {

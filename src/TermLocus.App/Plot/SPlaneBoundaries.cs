@@ -17,7 +17,7 @@ public static class SPlaneBoundaries
     /// </summary>
     /// <param name="damping">ζ in [-1, 1].</param>
     /// <param name="reach">Length of each ray, &gt; 0.</param>
-    public static SpecBoundary Damping(double damping, double reach)
+    public static BoundaryCurve Damping(double damping, double reach)
     {
         if (!(damping >= -1 && damping <= 1))
         {
@@ -27,13 +27,13 @@ public static class SPlaneBoundaries
         CheckReach(reach);
         double across = Math.Sqrt(1 - (damping * damping));
         var upper = new Complex(-damping * reach, across * reach);
-        return new SpecBoundary(BoundaryKind.Damping, [upper, Complex.Zero, Complex.Conjugate(upper)]);
+        return new BoundaryCurve(BoundaryKind.Damping, [upper, Complex.Zero, Complex.Conjugate(upper)]);
     }
 
     /// <summary>The decay-rate limit Re(s) = −<paramref name="decayRate"/>: a vertical line from −reach·j to +reach·j.</summary>
     /// <param name="decayRate">σ in 1/s, finite.</param>
     /// <param name="reach">Half length of the line, &gt; 0.</param>
-    public static SpecBoundary DecayRate(double decayRate, double reach)
+    public static BoundaryCurve DecayRate(double decayRate, double reach)
     {
         if (!double.IsFinite(decayRate))
         {
@@ -41,14 +41,14 @@ public static class SPlaneBoundaries
         }
 
         CheckReach(reach);
-        return new SpecBoundary(
+        return new BoundaryCurve(
             BoundaryKind.DecayRate, [new Complex(-decayRate, -reach), new Complex(-decayRate, reach)]);
     }
 
     /// <summary>The natural-frequency limit |s| = <paramref name="naturalFrequency"/>, left half-plane half circle
     /// from +jωn through −ωn to −jωn.</summary>
     /// <param name="naturalFrequency">ωn in rad/s, &gt;= 0.</param>
-    public static SpecBoundary NaturalFrequency(double naturalFrequency) =>
+    public static BoundaryCurve NaturalFrequency(double naturalFrequency) =>
         new(BoundaryKind.NaturalFrequency, PlaneCurves.Arc(Complex.Zero, naturalFrequency, Math.PI / 2, 3 * Math.PI / 2));
 
     /// <summary>
@@ -56,10 +56,10 @@ public static class SPlaneBoundaries
     /// at the strictest of the minimum decay rate, ln 2 / longest time to half and 4 / longest settling time, and the
     /// ωn arcs. Overshoot is a time-response limit and has no line.
     /// </summary>
-    public static ImmutableArray<SpecBoundary> FromSpecs(Specs specs, double reach)
+    public static ImmutableArray<BoundaryCurve> FromSpecs(Specs specs, double reach)
     {
         ArgumentNullException.ThrowIfNull(specs);
-        var boundaries = ImmutableArray.CreateBuilder<SpecBoundary>();
+        var boundaries = ImmutableArray.CreateBuilder<BoundaryCurve>();
         if (specs.MinDamping is double zeta)
         {
             boundaries.Add(Damping(Math.Clamp(zeta, -1, 1), reach));

@@ -7,5 +7,5 @@ namespace TermLocus.App.Plot;
 public static class ZPlaneBoundaries
 {
     /// <summary>The unit circle |z| = 1, closed.</summary>
-    public static SpecBoundary UnitCircle() => new(BoundaryKind.UnitCircle, PlaneCurves.Circle(Complex.Zero, 1));
+    public static BoundaryCurve UnitCircle() => new(BoundaryKind.UnitCircle, PlaneCurves.Circle(Complex.Zero, 1));
 }

@@ -13,6 +13,11 @@ internal static class LocusAutomaticRange
     /// 1 % of the spread from the zeros they approach).</summary>
     private const double ApproachUnits = 100.0;
 
+    /// <summary>Crossings and break points beyond this many times the far-pole gain are ignored: they come from
+    /// poles and zeros that nearly cancel (or a zero at the origin up to rounding) and would stretch the range over
+    /// dozens of decades for a feature nobody can use.</summary>
+    private const double FeatureReach = 1e6;
+
     /// <summary>Doubling search bounds for families that are not affine: p from 2^-30 to 2^60.</summary>
     private const int LowestExponent = -30;
     private const int HighestExponent = 60;
@@ -33,7 +38,7 @@ internal static class LocusAutomaticRange
         double far = n > m ? unit * Math.Pow(farFactor, n - m) : ApproachUnits * unit;
         double features = AxisCrossingFinder.Solutions(split).Select(c => c.Value)
             .Concat(BreakPointFinder.Find(split, 0.0, double.MaxValue).Select(b => b.Value))
-            .Where(v => v > 0.0)
+            .Where(v => v > 0.0 && v <= FeatureReach * far)
             .DefaultIfEmpty(0.0)
             .Max();
         double upper = Math.Max(far, FeatureMargin * features);
@@ -56,8 +61,8 @@ internal static class LocusAutomaticRange
         return points;
     }
 
-    /// <summary>Largest distance of the points from their mean; at least 1e-3 of their largest magnitude, and 1 rad/s
-    /// when all sit at one point.</summary>
+    /// <summary>Largest distance of the points from their mean, but at least half their largest magnitude (the view
+    /// holds the origin too); 1 rad/s when all sit within <see cref="TraceScale.OriginRadius"/> of the origin.</summary>
     private static double Spread(IReadOnlyList<Complex> points)
     {
         if (points.Count == 0)
@@ -66,10 +71,8 @@ internal static class LocusAutomaticRange
         }
 
         var mean = points.Aggregate(Complex.Zero, (a, b) => a + b) / points.Count;
-        double spread = points.Max(z => Complex.Abs(z - mean));
-        double size = points.Max(z => z.Magnitude);
-        spread = Math.Max(spread, 1e-3 * size);
-        return spread > 0.0 ? spread : 1.0;
+        double spread = Math.Max(points.Max(z => Complex.Abs(z - mean)), 0.5 * points.Max(z => z.Magnitude));
+        return spread > TraceScale.OriginRadius ? spread : 1.0;
     }
 
     /// <summary>Doubles p until the poles are farFactor times their spread at p = 0 away from their mean there, then

@@ -37,7 +37,7 @@ public static class LocusTracer
             return new LocusTrace(from, to, scale, options.MaxStepFraction, [], drops.Values, 0, true);
         }
 
-        var warp = TraceParameterWarp.For(from, to);
+        var warp = TraceParameterWarp.For(family, from, to, options.MaxStepFraction * scale);
         var coefficients = new TraceCoefficients(family);
         var budget = new TraceBudget(options.MaxValues);
         var branches = ImmutableArray.CreateBuilder<LocusBranch>();
@@ -77,7 +77,7 @@ public static class LocusTracer
 
     /// <summary>
     /// A range [0, b] for a parameter that has none: b lies past the last imaginary-axis crossing and break point
-    /// (at least <see cref="LocusAutomaticRange.FeatureMargin"/> times the largest such value) and far enough that the
+    /// (at least twice the largest such value, ignoring values over a million times the next figure) and far enough that the
     /// poles heading for infinity are <paramref name="farFactor"/> times the spread of the open-loop poles and zeros
     /// from their centroid (or, for families that are not affine, of the poles at 0 from their mean).
     /// <paramref name="farFactor"/> must be above 1 (default 5); throws <see cref="ArgumentOutOfRangeException"/> otherwise.

@@ -16,7 +16,8 @@ namespace TermLocus.Core.Analysis;
 /// <param name="InitialIntervals">Number of equal steps of the first, coarse sampling (in a warped parameter); 8 to 10 000.</param>
 /// <param name="Scale">
 /// The view scale in rad/s (&gt; 0), or null to take the largest magnitude of the open-loop poles and zeros
-/// (affine families) or of the poles at the start of the range (other families).
+/// (affine families) or of the poles at the start of the range (other families); when those all lie within 1e-9 rad/s
+/// of the origin, of the poles at the end of the range; failing that 1 rad/s.
 /// </param>
 /// <param name="FarLimit">
 /// Where the parameter reaches a value at which the characteristic polynomial drops in degree, poles run off to

@@ -18,8 +18,11 @@ internal static class TraceRootRefiner
     /// or real-only starts can still split into complex pairs.</summary>
     private const double StartNudge = 1e-9;
 
-    /// <summary>Sum of the roots must match Vieta's value to this share of Σ|z|, catching a lost or doubled root.</summary>
-    private const double VietaTolerance = 1e-7;
+    /// <summary>Allowed error of the roots' sum, in multiples of their summed accuracy estimates.</summary>
+    private const double VietaSlack = 10.0;
+
+    /// <summary>Allowed error of the roots' sum as a share of Σ|z|, whatever the estimates say.</summary>
+    private const double VietaFloor = 1e-12;
 
     private const double GoldenAngle = 2.399963229728653;
 
@@ -27,7 +30,7 @@ internal static class TraceRootRefiner
 
     /// <summary>|P(z)| within this many rounding units of Σ|c_k||z|^k cannot be reduced further: z is a root as far
     /// as double precision can tell.</summary>
-    private const double RoundingFactor = 4.0;
+    private const double RoundingFactor = 1.0;
 
     /// <summary>
     /// Refines <paramref name="z"/> in place to the roots of the polynomial with ascending coefficients
@@ -75,23 +78,14 @@ internal static class TraceRootRefiner
             allDone = false;
             var zi = z[i];
             Evaluate(c, zi, out var value, out var slope, out double bound);
-            if (value.Magnitude <= RoundingFactor * n * MachineEpsilon * bound)
+            if (value.Magnitude <= RoundingFactor * MachineEpsilon * bound)
             {
                 done[i] = true;
                 continue;
             }
 
             var ratio = value / slope;
-            Complex repulsion = Complex.Zero;
-            for (int j = 0; j < n; j++)
-            {
-                if (j != i)
-                {
-                    repulsion += Complex.One / (zi - z[j]);
-                }
-            }
-
-            var step = ratio / (Complex.One - ratio * repulsion);
+            var step = ratio / (Complex.One - (ratio * Repulsion(z, i)));
             z[i] = zi - step;
             if (step.Magnitude <= StepTolerance * z[i].Magnitude || !double.IsFinite(step.Real))
             {
@@ -102,23 +96,41 @@ internal static class TraceRootRefiner
         return allDone;
     }
 
+    /// <summary>Σ_{j≠i} 1/(z_i − z_j), with real arithmetic (1/d = conj(d)/|d|²) because it is the inner loop.</summary>
+    private static Complex Repulsion(ReadOnlySpan<Complex> z, int i)
+    {
+        double x = z[i].Real, y = z[i].Imaginary, re = 0.0, im = 0.0;
+        for (int j = 0; j < z.Length; j++)
+        {
+            if (j == i)
+            {
+                continue;
+            }
+
+            double dx = x - z[j].Real, dy = y - z[j].Imaginary;
+            double inverse = 1.0 / ((dx * dx) + (dy * dy));
+            re += dx * inverse;
+            im -= dy * inverse;
+        }
+
+        return new Complex(re, im);
+    }
+
     /// <summary>P(z), P'(z) by Horner, and Σ|c_k||z|^k, the scale of rounding error in P(z).</summary>
     private static void Evaluate(ReadOnlySpan<double> c, Complex z, out Complex value, out Complex slope, out double bound)
     {
         int n = c.Length - 1;
-        Complex p = c[n];
-        Complex dp = Complex.Zero;
-        double az = z.Magnitude;
-        double b = Math.Abs(c[n]);
+        double x = z.Real, y = z.Imaginary, az = z.Magnitude;
+        double pr = c[n], pi = 0.0, dr = 0.0, di = 0.0, b = Math.Abs(c[n]);
         for (int k = n - 1; k >= 0; k--)
         {
-            dp = dp * z + p;
-            p = p * z + c[k];
-            b = b * az + Math.Abs(c[k]);
+            (dr, di) = ((dr * x) - (di * y) + pr, (dr * y) + (di * x) + pi);
+            (pr, pi) = ((pr * x) - (pi * y) + c[k], (pr * y) + (pi * x));
+            b = (b * az) + Math.Abs(c[k]);
         }
 
-        value = p;
-        slope = dp;
+        value = new Complex(pr, pi);
+        slope = new Complex(dr, di);
         bound = b;
     }
 
@@ -135,18 +147,26 @@ internal static class TraceRootRefiner
         return true;
     }
 
+    /// <summary>
+    /// The roots' sum must match Vieta's −c[n−1]/c[n] to within the roots' own accuracy (Σ of their Newton step
+    /// sizes, floored at the rounding level). Two estimates on one root with another root missed would be off by
+    /// a whole root separation, far more.
+    /// </summary>
     private static bool SumMatchesVieta(ReadOnlySpan<double> c, ReadOnlySpan<Complex> z)
     {
         int n = c.Length - 1;
         Complex sum = Complex.Zero;
-        double size = 0.0;
+        double accuracy = 0.0, size = 0.0;
         foreach (var v in z)
         {
             sum += v;
             size += v.Magnitude;
+            Evaluate(c, v, out var value, out var slope, out double bound);
+            double residual = Math.Max(value.Magnitude, MachineEpsilon * bound);
+            accuracy += residual / Math.Max(slope.Magnitude, double.Epsilon);
         }
 
         double expected = -c[n - 1] / c[n];
-        return Complex.Abs(sum - expected) <= VietaTolerance * Math.Max(size, MachineEpsilon);
+        return Complex.Abs(sum - expected) <= (VietaSlack * accuracy) + (VietaFloor * size);
     }
 }

@@ -8,21 +8,26 @@ internal static class TraceScale
     /// <summary>Used when every reference pole sits at the origin, rad/s.</summary>
     private const double Fallback = 1.0;
 
+    /// <summary>Poles closer to the origin than this (rad/s, a time constant of some 30 years) count as at the
+    /// origin: no physical loop has a smaller scale, and a scale of 1e-77 would make the step bound meaningless.</summary>
+    internal const double OriginRadius = 1e-9;
+
     /// <summary>
     /// Largest magnitude of the open-loop poles and zeros for an affine family, else of the poles at
-    /// <paramref name="from"/>; failing that (all at the origin) of the poles at <paramref name="to"/>; else 1 rad/s.
+    /// <paramref name="from"/>; failing that (all within <see cref="OriginRadius"/> of the origin) of the poles at
+    /// <paramref name="to"/>; else 1 rad/s.
     /// </summary>
     internal static double Default(CharacteristicFamily family, double from, double to)
     {
         double s = family.Affine is { } split
             ? Math.Max(LargestRoot(split.A), LargestRoot(split.B))
             : LargestRoot(family.At(from));
-        if (s <= 0.0)
+        if (!(s > OriginRadius))
         {
             s = LargestRoot(family.At(to));
         }
 
-        return s > 0.0 && double.IsFinite(s) ? s : Fallback;
+        return s > OriginRadius && double.IsFinite(s) ? s : Fallback;
     }
 
     /// <summary>Largest root magnitude of <paramref name="p"/>; 0 for a constant or zero polynomial.</summary>

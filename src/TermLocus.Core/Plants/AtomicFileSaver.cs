@@ -67,6 +67,35 @@ public static class AtomicFileSaver
         return result.Succeeded ? result : throw new AtomicSaveException(result);
     }
 
+    /// <summary>
+    /// Writes <paramref name="bytes"/> to <paramref name="path"/> whether or not it exists (a recovery file, a save
+    /// under another name), with the same atomic replacement but no changed-on-disk check. An existing file is replaced
+    /// only when <paramref name="overwrite"/> is true (its permission bits kept); a new file gets the default mode.
+    /// </summary>
+    public static AtomicSaveResult TryWriteFile(string path, ReadOnlySpan<byte> bytes, bool overwrite)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        if (!TryResolveTarget(path, out var target, out var failure))
+        {
+            if (failure!.Outcome != SaveOutcome.Missing)
+            {
+                return failure;
+            }
+
+            target = Path.GetFullPath(path);
+            if (!Directory.Exists(Path.GetDirectoryName(target)))
+            {
+                return new(SaveOutcome.Failed, target, $"the folder of {path} does not exist");
+            }
+
+            return Replace(path, target, bytes);
+        }
+
+        return !overwrite
+            ? new(SaveOutcome.AlreadyExists, target, $"{path} exists already; choose another name")
+            : WriteProblem(path, target) ?? Replace(path, target, bytes);
+    }
+
     private static bool TryResolveTarget(string path, out string target, out AtomicSaveResult? failure)
     {
         target = path;
@@ -157,7 +186,7 @@ public static class AtomicFileSaver
     private static void WriteTemporary(string temp, string target, ReadOnlySpan<byte> newBytes)
     {
         using var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None);
-        if (!OperatingSystem.IsWindows())
+        if (!OperatingSystem.IsWindows() && File.Exists(target))
         {
             // The create mode is masked by the umask; set the original's bits on the open handle instead.
             File.SetUnixFileMode(stream.SafeFileHandle, File.GetUnixFileMode(target));

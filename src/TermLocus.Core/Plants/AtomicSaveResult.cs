@@ -21,6 +21,9 @@ public enum SaveOutcome
     /// <summary>The folder does not allow creating the temporary file; nothing was written.</summary>
     ReadOnlyFolder,
 
+    /// <summary>A new file was asked for but one exists already; nothing was written.</summary>
+    AlreadyExists,
+
     /// <summary>An I/O error stopped the save; the original file is untouched.</summary>
     Failed,
 }

@@ -18,11 +18,12 @@ internal sealed class LoopExpression
 
     public ParsedExpression Parsed { get; }
 
-    /// <summary>Parses <paramref name="text"/> and resolves its names to slots.</summary>
+    /// <summary>Parses <paramref name="text"/> in <paramref name="variable"/> (s or z) and resolves its names to slots.</summary>
     /// <exception cref="PlantFileException">A syntax error, or a name that is not in [parameters] (located at its first use).</exception>
-    public static LoopExpression Bind(ExpressionText text, string file, IReadOnlyDictionary<string, int> slotByName)
+    public static LoopExpression Bind(
+        ExpressionText text, string file, IReadOnlyDictionary<string, int> slotByName, string variable = ExpressionNames.LaplaceVariable)
     {
-        var parsed = ExpressionParser.Parse(text, file);
+        var parsed = ExpressionParser.Parse(text, file, variable);
         var slots = new int[parsed.DistinctNames.Length];
         for (int i = 0; i < slots.Length; i++)
         {

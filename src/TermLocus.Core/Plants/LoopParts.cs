@@ -7,19 +7,18 @@ using TermLocus.Core.Expressions;
 namespace TermLocus.Core.Plants;
 
 /// <summary>
-/// The bound expressions of a loop (controller C, plant G, sensor H and the feedback sign, or a given
-/// characteristic) and the arithmetic that turns them into closed-loop polynomials. Works on parameter arrays.
+/// The bound loop of a plant file (a <see cref="LoopPath"/> and the feedback sign, or a given characteristic) and
+/// the arithmetic that turns it into closed-loop polynomials in the plane's variable. Works on parameter arrays.
 /// </summary>
 internal sealed class LoopParts
 {
-    private readonly LoopExpression?[] path;
     private readonly LoopExpression? given;
     private readonly FeedbackSign feedback;
     private readonly ParsedExpression blame;
 
-    private LoopParts(LoopExpression?[] path, LoopExpression? given, FeedbackSign feedback, ParsedExpression blame)
+    private LoopParts(LoopPath? path, LoopExpression? given, FeedbackSign feedback, ParsedExpression blame)
     {
-        this.path = path;
+        Path = path;
         this.given = given;
         this.feedback = feedback;
         this.blame = blame;
@@ -28,8 +27,14 @@ internal sealed class LoopParts
     /// <summary>The given characteristic, or null for a loop built from C, G and H.</summary>
     public LoopExpression? Given => given;
 
+    /// <summary>The loop built from C, G and H, or null when the characteristic is given.</summary>
+    public LoopPath? Path { get; }
+
+    /// <summary>The sign of the feedback.</summary>
+    public FeedbackSign Feedback => feedback;
+
     /// <summary>Parses and binds the loop of <paramref name="plant"/>.</summary>
-    public static LoopParts Bind(Plant plant, ParameterSlots slots)
+    public static LoopParts Bind(Plant plant, ParameterSlots slots, int delayOrder)
     {
         var loop = plant.Loop;
         if ((loop.Plant is null) == (loop.Characteristic is null))
@@ -37,39 +42,28 @@ internal sealed class LoopParts
             throw new ArgumentException("The loop must give exactly one of 'plant' and 'characteristic'.", nameof(plant));
         }
 
-        LoopExpression? BindOrNull(ExpressionText? text) =>
-            text is null ? null : LoopExpression.Bind(text, plant.Path, slots.SlotByName);
-
+        LoopBinder.CheckTimes(loop);
         if (loop.Characteristic is not null)
         {
-            var given = BindOrNull(loop.Characteristic)!;
-            int division = given.Parsed.FirstDivisionByVariable();
-            if (division >= 0)
-            {
-                throw new PlantFileException(given.Parsed.ErrorAt(
-                    division, "the characteristic must be a polynomial in s: it cannot divide by an expression containing s"));
-            }
-
-            return new LoopParts([], given, loop.Feedback, given.Parsed);
+            var given = LoopBinder.BindCharacteristic(plant, slots);
+            return new LoopParts(null, given, loop.Feedback, given.Parsed);
         }
 
-        var g = BindOrNull(loop.Plant)!;
-        LoopExpression?[] path = [BindOrNull(loop.Controller), g, BindOrNull(loop.Sensor)];
-        CheckLoopDegree(path, g.Parsed);
-        return new LoopParts(path, null, loop.Feedback, g.Parsed);
+        var path = LoopBinder.BindPath(plant, slots, delayOrder);
+        return new LoopParts(path, null, loop.Feedback, path.Blame);
     }
 
     public Polynomial Characteristic(double[] slots) =>
         given is not null ? GivenCharacteristic(slots) : FromLoopGain(LoopGain(slots));
 
-    /// <summary>C·G·H formed as (C·G)·H, nothing cancelled.</summary>
-    public Fraction LoopGain(double[] slots) => Product(Evaluate(path, slots));
+    /// <summary>The product of the path's factors in order, nothing cancelled.</summary>
+    public Fraction LoopGain(double[] slots) => Product(Path!.Factors(slots));
 
     public RationalFunction ReferenceToOutput(double[] slots)
     {
-        var f = Evaluate(path, slots);
-        var gain = Product(f);
-        return new RationalFunction(f[0].Numerator * f[1].Numerator * f[2].Denominator, FromLoopGain(gain));
+        var factors = Path!.Factors(slots);
+        var characteristic = FromLoopGain(Product(factors));
+        return new RationalFunction(Path.ReferenceNumerator(slots, factors), characteristic);
     }
 
     /// <summary>
@@ -91,31 +85,21 @@ internal sealed class LoopParts
     {
         if (given is not null)
         {
-            return p => GivenCharacteristic(With(slots, swept, p));
-        }
-
-        var fixedParts = new Fraction?[path.Length];
-        for (int i = 0; i < path.Length; i++)
-        {
-            fixedParts[i] = path[i] is { } e && e.Uses(swept) ? null : Evaluate(path[i], slots);
-        }
-
-        return p =>
-        {
-            var v = With(slots, swept, p);
-            var f = new Fraction[path.Length];
-            for (int i = 0; i < f.Length; i++)
+            return p =>
             {
-                f[i] = fixedParts[i] ?? Evaluate(path[i], v);
-            }
+                var v = (double[])slots.Clone();
+                v[swept] = p;
+                return GivenCharacteristic(v);
+            };
+        }
 
-            return FromLoopGain(Product(f));
-        };
+        var factors = Path!.FactorFamily(slots, swept);
+        return p => FromLoopGain(Product(factors(p)));
     }
 
     public ImmutableArray<Complex> HiddenPoles(double[] slots, double relativeTolerance)
     {
-        var f = Evaluate(path, slots);
+        var f = Path!.CancellableFactors(Path.Factors(slots));
         return f.Any(x => x.Numerator.IsZero)
             ? []
             : LoopModelHiddenPoles.Find(f.Select(x => x.Numerator), f.Select(x => x.Denominator), relativeTolerance);
@@ -123,20 +107,19 @@ internal sealed class LoopParts
 
     private BivariatePolynomial? SweptCharacteristic(double[] slots, int swept)
     {
-        SweptFraction? gain = null;
-        foreach (var part in path)
+        var factors = Path!.SweptFactors(slots, swept);
+        if (factors is null)
         {
-            var value = part is null ? SweptFraction.Constant(1.0) : part.EvaluateSwept(slots, swept);
-            if (value is null)
-            {
-                return null;
-            }
-
-            gain = gain is null ? value : SweptFraction.Multiply(gain, value);
+            return null;
         }
 
-        return gain is null ? null
-            : feedback == FeedbackSign.Negative ? gain.Denominator + gain.Numerator : gain.Denominator - gain.Numerator;
+        var gain = factors[0];
+        foreach (var factor in factors.Skip(1))
+        {
+            gain = SweptFraction.Multiply(gain, factor);
+        }
+
+        return feedback == FeedbackSign.Negative ? gain.Denominator + gain.Numerator : gain.Denominator - gain.Numerator;
     }
 
     private Polynomial GivenCharacteristic(double[] slots) => Checked(given!.Evaluate(slots).Numerator, "the characteristic polynomial");
@@ -148,9 +131,14 @@ internal sealed class LoopParts
         return Checked(p, $"the characteristic polynomial (numerator of 1 {sign} controller*plant*sensor)");
     }
 
-    private Fraction Product(Fraction[] f)
+    private Fraction Product(Fraction[] factors)
     {
-        var gain = Fraction.Multiply(Fraction.Multiply(f[0], f[1]), f[2]);
+        var gain = factors[0];
+        foreach (var f in factors.AsSpan(1))
+        {
+            gain = Fraction.Multiply(gain, f);
+        }
+
         return gain.IsUsable
             ? gain
             : throw new PlantFileException(blame.ErrorAt(0, "the loop gain controller*plant*sensor is not finite for these parameter values"));
@@ -166,32 +154,5 @@ internal sealed class LoopParts
         return p.Coefficients.All(double.IsFinite)
             ? p
             : throw new PlantFileException(blame.ErrorAt(0, $"{what} is not finite for these parameter values"));
-    }
-
-    private static Fraction[] Evaluate(LoopExpression?[] parts, double[] slots) =>
-        parts.Select(p => Evaluate(p, slots)).ToArray();
-
-    private static Fraction Evaluate(LoopExpression? part, double[] slots) => part?.Evaluate(slots) ?? Fraction.One;
-
-    private static double[] With(double[] slots, int slot, double value)
-    {
-        var v = (double[])slots.Clone();
-        v[slot] = value;
-        return v;
-    }
-
-    private static void CheckLoopDegree(LoopExpression?[] path, ParsedExpression blame)
-    {
-        var bound = DegreeBound.Constant;
-        foreach (var part in path)
-        {
-            bound = DegreeBound.Product(bound, part?.Parsed.Degree ?? DegreeBound.Constant);
-        }
-
-        if (bound.Max > ExpressionLimits.MaxDegree)
-        {
-            throw new PlantFileException(blame.ErrorAt(
-                0, $"degree too high: controller*plant*sensor would reach degree {bound.Max} (at most {ExpressionLimits.MaxDegree})"));
-        }
     }
 }

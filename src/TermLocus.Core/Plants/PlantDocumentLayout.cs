@@ -59,7 +59,7 @@ internal sealed class PlantDocumentLayout
 
         if (!SingleTables.Contains(name))
         {
-            throw context.Fail(table, UnknownTableMessage(name));
+            throw context.Fail(table, UnknownTableMessage(name, isArray));
         }
 
         if (isArray)
@@ -75,15 +75,17 @@ internal sealed class PlantDocumentLayout
         tables.Add(name, table);
     }
 
-    private static string UnknownTableMessage(string name)
+    private static string UnknownTableMessage(string name, bool isArray)
     {
-        var visible = PlantTextSafety.Visible(name);
+        var visible = isArray ? $"[{PlantTextSafety.Visible(name)}]" : PlantTextSafety.Visible(name);
         if (name.StartsWith("parameters.", StringComparison.Ordinal))
         {
             var parameter = PlantTextSafety.Visible(name["parameters.".Length..]);
             return $"unknown table [{visible}]; write {parameter} = {{ value = ... }} under [parameters]";
         }
 
-        return $"unknown table [{visible}]{KeySuggestion.Hint(name, SingleTables.Append(RecordTable), "[", "]")}";
+        var closest = NameSuggestion.Closest(name, SingleTables.Append(RecordTable));
+        var hint = closest is null ? string.Empty : closest == RecordTable ? $" (did you mean [[{closest}]]?)" : $" (did you mean [{closest}]?)";
+        return $"unknown table [{visible}]{hint}";
     }
 }

@@ -27,6 +27,12 @@ public sealed record ResponseGrid(double DurationSeconds, int Samples)
     /// <summary>The most samples <see cref="For"/> chooses.</summary>
     public const int MaximumAutomaticSamples = 20001;
 
+    /// <summary>The fewest sample instants <see cref="ForSampled"/> chooses.</summary>
+    public const int MinimumSampledSamples = 21;
+
+    // With only deadbeat poles the response is over within degree samples; this many more show it settled.
+    private const int DeadbeatSamples = 20;
+
     private const double SignificantResidue = 1e-3;
 
     // Roots closer than this (relative) are treated as one repeated pole; a root finder spreads a triple root by
@@ -56,7 +62,7 @@ public sealed record ResponseGrid(double DurationSeconds, int Samples)
             throw new ArgumentException("Delay must be a finite number of seconds, 0 or above.", nameof(delaySeconds));
         }
 
-        var modes = SignificantPoles(closedLoop);
+        var modes = SignificantPoles(closedLoop, s => 1.0 / s, s => s == Complex.Zero);
         double duration = BaseDuration(modes) + delaySeconds;
         duration = Math.Clamp(duration, ShortestDurationSeconds, LongestDurationSeconds);
         double fastest = modes.Count == 0 ? 0.0 : modes.Max(Complex.Abs);
@@ -65,7 +71,40 @@ public sealed record ResponseGrid(double DurationSeconds, int Samples)
         return new ResponseGrid(duration, samples);
     }
 
-    private static double BaseDuration(List<Complex> modes)
+    /// <summary>
+    /// The number of sample instants for the step response of the sampled closed loop
+    /// <paramref name="closedLoopInZ"/> (rational in z, sample time T = <paramref name="sampleTimeSeconds"/>, finite,
+    /// &gt; 0) whose output is delayed by <paramref name="delaySeconds"/> (finite, &gt;= 0): the duration rules of
+    /// <see cref="For"/> applied to the significant poles' equivalent s-plane points s = ln(z)/T (a pole at z = 0
+    /// dies out within a sample and sets no time scale; with no other pole the duration is (degree + 20)·T), then
+    /// one sample per T, at least <see cref="MinimumSampledSamples"/>, at most <see cref="MaximumAutomaticSamples"/>.
+    /// Residues are those of Y(z) = H(z)·z/(z − 1). Throws <see cref="ArgumentException"/> for a bad time.
+    /// </summary>
+    public static ResponseGrid ForSampled(RationalFunction closedLoopInZ, double sampleTimeSeconds, double delaySeconds = 0.0)
+    {
+        ArgumentNullException.ThrowIfNull(closedLoopInZ);
+        if (!double.IsFinite(sampleTimeSeconds) || sampleTimeSeconds <= 0.0)
+        {
+            throw new ArgumentException("Sample time must be a finite number of seconds above 0.", nameof(sampleTimeSeconds));
+        }
+
+        if (!double.IsFinite(delaySeconds) || delaySeconds < 0.0)
+        {
+            throw new ArgumentException("Delay must be a finite number of seconds, 0 or above.", nameof(delaySeconds));
+        }
+
+        var modes = SignificantPoles(closedLoopInZ, z => z / (z - 1.0), z => z == Complex.One)
+            .Where(z => z != Complex.Zero)
+            .Select(z => ZPlane.ToS(z, sampleTimeSeconds))
+            .ToList();
+        double fallback = (closedLoopInZ.Denominator.Degree + DeadbeatSamples) * sampleTimeSeconds;
+        double duration = BaseDuration(modes, fallback) + delaySeconds;
+        double wanted = Math.Ceiling(duration / sampleTimeSeconds) + 1.0;
+        int samples = (int)Math.Clamp(wanted, MinimumSampledSamples, MaximumAutomaticSamples);
+        return new ResponseGrid(sampleTimeSeconds * (samples - 1), samples);
+    }
+
+    private static double BaseDuration(List<Complex> modes, double fallback = DefaultDurationSeconds)
     {
         double growth = 0.0, slowestDecay = double.PositiveInfinity, slowestSwing = double.PositiveInfinity;
         foreach (var p in modes)
@@ -96,13 +135,14 @@ public sealed record ResponseGrid(double DurationSeconds, int Samples)
         double byDecay = double.IsPositiveInfinity(slowestDecay) ? 0.0 : DecayMultiple / slowestDecay;
         double bySwing = double.IsPositiveInfinity(slowestSwing) ? 0.0 : UndampedPeriods * 2.0 * Math.PI / slowestSwing;
         double longest = Math.Max(byDecay, bySwing);
-        return longest > 0.0 ? longest : DefaultDurationSeconds;
+        return longest > 0.0 ? longest : fallback;
     }
 
-    // Residue of the step response Y(s) = H(s)/s at a simple pole p is N(p) / (p·D'(p)). Repeated poles (which a
-    // root finder returns as a tight cluster with huge, mutually cancelling residues) and poles at the origin
-    // always count; an isolated pole counts when its residue is not negligible beside the largest isolated one.
-    private static List<Complex> SignificantPoles(RationalFunction h)
+    // Residue of the step response Y = H·step at a simple pole p is N(p)·step(p) / D'(p) (step(s) = 1/s, or
+    // step(z) = z/(z − 1)). Repeated poles (which a root finder returns as a tight cluster with huge, mutually
+    // cancelling residues) and poles where the step itself has its pole always count; an isolated pole counts when
+    // its residue is not negligible beside the largest isolated one.
+    private static List<Complex> SignificantPoles(RationalFunction h, Func<Complex, Complex> step, Func<Complex, bool> atStepPole)
     {
         if (h.Denominator.Degree < 1)
         {
@@ -115,10 +155,10 @@ public sealed record ResponseGrid(double DurationSeconds, int Samples)
         for (int i = 0; i < poles.Length; i++)
         {
             var p = poles[i];
-            bool clustered = p == Complex.Zero || poles.Where((q, j) => j != i).Any(q => IsNear(p, q));
+            bool clustered = atStepPole(p) || poles.Where((q, j) => j != i).Any(q => IsNear(p, q));
             weights[i] = clustered
                 ? double.PositiveInfinity
-                : Complex.Abs(h.Numerator.Evaluate(p)) / Complex.Abs(p * slope.Evaluate(p));
+                : Complex.Abs(h.Numerator.Evaluate(p) * step(p)) / Complex.Abs(slope.Evaluate(p));
         }
 
         double largest = weights.Where(double.IsFinite).DefaultIfEmpty(0.0).Max();

@@ -68,7 +68,22 @@ public sealed record StepFigures(
     /// Throws <see cref="ArgumentException"/> when the lengths differ, fewer than 2 samples are given, the times
     /// are not strictly increasing or a value is not finite.
     /// </summary>
-    public static StepFigures? From(IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState)
+    public static StepFigures? From(IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState) =>
+        From(times, outputs, steadyState, refinePeak: true);
+
+    /// <summary>
+    /// The figures of a sampled loop's output sequence (<see cref="StepResponse.SimulateSampled"/>): as
+    /// <see cref="From(ResponseTrace, double?)"/>, except that the peak is the largest sample itself, not a parabola
+    /// through three samples, since nothing is known between the sample instants. Rise and settling times are still
+    /// interpolated linearly between samples.
+    /// </summary>
+    public static StepFigures? FromSamples(ResponseTrace trace, double? steadyState)
+    {
+        ArgumentNullException.ThrowIfNull(trace);
+        return From(trace.Times, trace.Outputs, steadyState, refinePeak: false);
+    }
+
+    private static StepFigures? From(IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState, bool refinePeak)
     {
         ArgumentNullException.ThrowIfNull(times);
         ArgumentNullException.ThrowIfNull(outputs);
@@ -89,7 +104,7 @@ public sealed record StepFigures(
         }
 
         var r = outputs.Select(y => y / final).ToArray();
-        var (peakTime, peak) = Peak(times, r);
+        var (peakTime, peak) = Peak(times, r, refinePeak);
         bool overshoots = peak > 1.0;
         return new StepFigures(
             final,
@@ -154,7 +169,7 @@ public sealed record StepFigures(
         return t[k - 1] + (Math.Clamp(fraction, 0.0, 1.0) * (t[k] - t[k - 1]));
     }
 
-    private static (double Time, double Value) Peak(IReadOnlyList<double> t, double[] r)
+    private static (double Time, double Value) Peak(IReadOnlyList<double> t, double[] r, bool refine)
     {
         int best = 0;
         for (int k = 1; k < r.Length; k++)
@@ -165,7 +180,7 @@ public sealed record StepFigures(
             }
         }
 
-        if (best == 0 || best == r.Length - 1)
+        if (!refine || best == 0 || best == r.Length - 1)
         {
             return (t[best], r[best]);
         }

@@ -4,5 +4,5 @@ namespace TermLocus.Cli;
 internal static class VerbCatalog
 {
     /// <summary>A fresh instance of each verb.</summary>
-    public static IReadOnlyList<IVerb> All() => [];
+    public static IReadOnlyList<IVerb> All() => [new Verbs.CheckVerb()];
 }

@@ -110,7 +110,7 @@ public class PlaneRendererTests
 
         int solid = Count(new PlaneScene { Branches = [new PlaneBranch(0, [.. path])] });
         int trail = Count(new PlaneScene { BandTrails = [[.. path]] });
-        int limit = Count(new PlaneScene { Boundaries = [new SpecBoundary(BoundaryKind.DecayRate, [.. path])] });
+        int limit = Count(new PlaneScene { Boundaries = [new BoundaryCurve(BoundaryKind.DecayRate, [.. path])] });
 
         Assert.Equal(65, solid); // 4 units x 16 dots, both ends
         Assert.Equal(33, trail);

@@ -2,7 +2,6 @@ using System.Numerics;
 using TermLocus.App.Plot;
 using TermLocus.Core.Analysis;
 using TermLocus.Core.Plants;
-using SpecBoundary = TermLocus.App.Plot.SpecBoundary;
 
 namespace TermLocus.App.Tests.Plot;
 
@@ -15,7 +14,7 @@ public class SPlaneBoundariesTests
     [Fact]
     public void Damping_lines_leave_the_origin_at_acos_zeta_from_the_negative_real_axis()
     {
-        SpecBoundary boundary = SPlaneBoundaries.Damping(0.5, 10);
+        BoundaryCurve boundary = SPlaneBoundaries.Damping(0.5, 10);
 
         Complex upper = boundary.Points[0];
         Complex lower = boundary.Points[2];
@@ -29,7 +28,7 @@ public class SPlaneBoundariesTests
     [Fact]
     public void The_decay_rate_line_is_vertical_at_minus_sigma()
     {
-        SpecBoundary boundary = SPlaneBoundaries.DecayRate(0.8, 5);
+        BoundaryCurve boundary = SPlaneBoundaries.DecayRate(0.8, 5);
 
         Assert.All(boundary.Points, p => Assert.Equal(-0.8, p.Real, Tol));
         Assert.Equal(-5.0, boundary.Points[0].Imaginary, Tol);
@@ -39,7 +38,7 @@ public class SPlaneBoundariesTests
     [Fact]
     public void The_natural_frequency_arc_is_the_left_half_circle()
     {
-        SpecBoundary boundary = SPlaneBoundaries.NaturalFrequency(3);
+        BoundaryCurve boundary = SPlaneBoundaries.NaturalFrequency(3);
 
         Assert.All(boundary.Points, p => Assert.Equal(3.0, p.Magnitude, Tol));
         Assert.All(boundary.Points, p => Assert.True(p.Real <= Tol));
@@ -76,7 +75,7 @@ public class SPlaneBoundariesTests
     [Fact]
     public void The_unit_circle_is_closed_and_round()
     {
-        SpecBoundary circle = ZPlaneBoundaries.UnitCircle();
+        BoundaryCurve circle = ZPlaneBoundaries.UnitCircle();
 
         Assert.All(circle.Points, p => Assert.Equal(1.0, p.Magnitude, Tol));
         Assert.Equal(circle.Points[0].Real, circle.Points[^1].Real, Tol);

@@ -168,4 +168,17 @@ public sealed class AtomicFileSaverTests : IDisposable
         Assert.StartsWith(text.Replace("value = 1,", "value = 2.5,", StringComparison.Ordinal), reloaded.Text, StringComparison.Ordinal);
         Assert.Equal(SaveOutcome.ChangedOnDisk, AtomicFileSaver.TrySave(document, OperatingPointWriter.Apply(document, 3, record)).Outcome);
     }
+
+    [Fact]
+    public void Writing_a_new_file_creates_it_and_refuses_to_replace_unless_asked()
+    {
+        var path = folder.File("plant.toml.recovery");
+
+        Assert.Equal(SaveOutcome.Saved, AtomicFileSaver.TryWriteFile(path, OldBytes, overwrite: false).Outcome);
+        Assert.Equal(SaveOutcome.AlreadyExists, AtomicFileSaver.TryWriteFile(path, NewBytes, overwrite: false).Outcome);
+        Assert.Equal(OldBytes, File.ReadAllBytes(path));
+        Assert.Equal(SaveOutcome.Saved, AtomicFileSaver.TryWriteFile(path, NewBytes, overwrite: true).Outcome);
+        Assert.Equal(NewBytes, File.ReadAllBytes(path));
+        Assert.Equal(SaveOutcome.Failed, AtomicFileSaver.TryWriteFile(folder.File("no/such/folder.toml"), NewBytes, overwrite: true).Outcome);
+    }
 }

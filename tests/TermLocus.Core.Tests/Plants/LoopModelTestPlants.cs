@@ -15,7 +15,9 @@ internal static class LoopModelTestPlants
         string? sensor = null,
         FeedbackSign feedback = FeedbackSign.Negative,
         string? characteristic = null,
-        string? sweep = null)
+        string? sweep = null,
+        double? delay = null,
+        double? sampleTime = null)
     {
         var list = parameters
             .Select((p, i) => new Parameter(p.Name, p.Value, null, null, string.Empty, string.Empty, new SourcePosition(3 + i, 1)))
@@ -28,8 +30,8 @@ internal static class LoopModelTestPlants
             Inline("characteristic", characteristic),
             sweep ?? parameters[0].Name,
             null,
-            null,
-            null);
+            delay,
+            sampleTime);
         return new Plant(FileName, "test loop", string.Empty, list, loop, Specs.None, []);
     }
 
@@ -41,6 +43,29 @@ internal static class LoopModelTestPlants
         FeedbackSign feedback = FeedbackSign.Negative,
         string? characteristic = null) =>
         LoopModel.Create(Loop(parameters, plant, controller, sensor, feedback, characteristic));
+
+    /// <summary>A model of a continuous loop with a transport delay (seconds) and optional model options.</summary>
+    public static LoopModel Delayed(
+        (string Name, double Value)[] parameters,
+        string plant,
+        double delay,
+        string? controller = null,
+        string? sensor = null,
+        FeedbackSign feedback = FeedbackSign.Negative,
+        LoopModelOptions? options = null) =>
+        LoopModel.Create(Loop(parameters, plant, controller, sensor, feedback, delay: delay), options ?? LoopModelOptions.Default);
+
+    /// <summary>A model of a sampled loop (controller in z) with an optional delay in seconds.</summary>
+    public static LoopModel Sampled(
+        (string Name, double Value)[] parameters,
+        string? plant,
+        double sampleTime,
+        string? controller = null,
+        string? sensor = null,
+        double? delay = null,
+        string? characteristic = null,
+        string? sweep = null) =>
+        LoopModel.Create(Loop(parameters, plant, controller, sensor, FeedbackSign.Negative, characteristic, sweep, delay, sampleTime));
 
     public static Dictionary<string, double> Values(params (string Name, double Value)[] values) =>
         values.ToDictionary(v => v.Name, v => v.Value, StringComparer.Ordinal);

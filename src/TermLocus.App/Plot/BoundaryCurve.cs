@@ -7,4 +7,4 @@ namespace TermLocus.App.Plot;
 /// <see cref="SPlaneBoundaries"/>, and z-plane contours arrive already mapped through z = e^{sT}.</summary>
 /// <param name="Kind">What the limit is.</param>
 /// <param name="Points">The polyline; clipped to the view when drawn, so it may reach far outside.</param>
-public sealed record SpecBoundary(BoundaryKind Kind, ImmutableArray<Complex> Points);
+public sealed record BoundaryCurve(BoundaryKind Kind, ImmutableArray<Complex> Points);

@@ -1,0 +1,103 @@
+using System.Collections.Immutable;
+using TermLocus.App.Text;
+using TermLocus.App.Workbench;
+using TermLocus.Core.Analysis;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.App.Reports;
+
+/// <summary>
+/// The text report of <c>termlocus check</c> for one plant: the values, the pole table (the workbench's own), each
+/// spec at nominal and at its worst point of the tolerance band, and a verdict line that never relies on colour.
+/// </summary>
+public static class CheckReportPresenter
+{
+    /// <summary>Report width in columns (the command-line contract caps text at 100).</summary>
+    public const int Width = 100;
+
+    /// <summary>The report's lines (no trailing newline on each).</summary>
+    /// <param name="file">The file as the user named it.</param>
+    /// <param name="plant">The plant checked.</param>
+    /// <param name="result">The check's result.</param>
+    /// <param name="glyphs">Symbols to use.</param>
+    public static ImmutableArray<string> Lines(string file, Plant plant, LoopCheckResult result, Glyphs glyphs)
+    {
+        var lines = ImmutableArray.CreateBuilder<string>();
+        lines.Add(SafeText.Fit($"{SafeText.Visible(file)}  {SafeText.Visible(plant.Title)}", Width));
+        var swept = plant.SweptParameter;
+        double value = result.Values[swept.Name];
+        string unit = swept.Unit.Length > 0 ? " " + SafeText.Visible(swept.Unit) : string.Empty;
+        lines.Add($"  {SafeText.Visible(swept.Name)} = {NumberText.Exact(value)}{unit} (swept)");
+        lines.Add(result.Box.Axes.IsEmpty
+            ? "  band: none (no toleranced parameter besides the swept one)"
+            : $"  band: {BandWording.Box(result.Box)} ({result.Box.CornerCount} corners and interior search)");
+        var snapshot = new PoleSnapshot(value, result.Poles, Misses(result.Nominal));
+        foreach (var line in PoleTablePresenter.Lines(snapshot, null, Width - 2, 2 + result.Poles.Length, glyphs))
+        {
+            lines.Add("  " + line.TrimEnd());
+        }
+
+        if (result.InfinitePoles > 0)
+        {
+            lines.Add($"  {result.InfinitePoles} pole(s) at infinity: the characteristic polynomial drops degree at this value");
+        }
+
+        foreach (var hidden in result.HiddenPoles)
+        {
+            lines.Add($"  note: the pole at {SpecWording.Location(hidden, glyphs)} is cancelled in the loop but is still a closed-loop pole");
+        }
+
+        AddSpecTable(lines, result, glyphs);
+        lines.Add("  " + Verdict(result, glyphs));
+        return lines.ToImmutable();
+    }
+
+    /// <summary>One line: pass with the smallest margin, or the worst violation across the band in words and numbers.</summary>
+    public static string Verdict(LoopCheckResult result, Glyphs glyphs)
+    {
+        if (!result.StableAcrossBand)
+        {
+            string where = result.WorstDecayRate is { } w ? " at " + BandWording.Point(result.Box, w.At.Toleranced) : string.Empty;
+            return $"verdict: FAIL {glyphs.Violated} the closed loop is unstable{where}";
+        }
+
+        var violated = result.Violated;
+        if (!violated.IsEmpty)
+        {
+            var worst = violated[0];
+            var miss = new SpecMiss(worst.Key, worst.Limit, worst.WorstActual, worst.WorstMargin, worst.WorstPole);
+            string more = violated.Length > 1 ? $" (and {violated.Length - 1} more)" : string.Empty;
+            return $"verdict: FAIL {glyphs.Violated} {SpecWording.Violation(miss, glyphs)} (with {BandWording.Point(result.Box, worst.At)}){more}";
+        }
+
+        var tightest = result.Band.OrderBy(b => b.WorstRelativeMargin).FirstOrDefault();
+        return tightest is null
+            ? $"verdict: pass {glyphs.Met} stable; the file sets no specs"
+            : $"verdict: pass {glyphs.Met} every spec met across the band; least margin {tightest.Key} "
+              + $"{NumberText.Significant(tightest.WorstMargin)} at {BandWording.Point(result.Box, tightest.At)}";
+    }
+
+    private static void AddSpecTable(ImmutableArray<string>.Builder lines, LoopCheckResult result, Glyphs g)
+    {
+        if (result.Band.IsEmpty)
+        {
+            return;
+        }
+
+        lines.Add($"  {"spec",-22}{"limit",10}{"nominal",12}{"worst in band",15}  where");
+        foreach (var band in result.Band)
+        {
+            var nominal = result.Nominal.Outcomes.FirstOrDefault(o => o.Spec == band.Spec);
+            string relation = SpecWording.IsMinimum(band.Key) ? g.AtLeast : g.AtMost;
+            string mark = band.Met ? " " : g.Violated;
+            lines.Add($"  {band.Key,-22}{relation + " " + NumberText.Exact(band.Limit),10}"
+                + $"{Figure(nominal?.WorstActual),12}{Figure(band.WorstActual),13} {mark}  {BandWording.Point(result.Box, band.At)}");
+        }
+    }
+
+    private static string Figure(double? value) => value is double v ? NumberText.Significant(v) : "none";
+
+    private static ImmutableArray<SpecMiss> Misses(SpecReport report) =>
+        report.Violations.Select(v => new SpecMiss(v.Key, v.Limit, v.Actual, v.Margin, v.Pole))
+            .OrderBy(m => m.RelativeMargin).ToImmutableArray();
+}

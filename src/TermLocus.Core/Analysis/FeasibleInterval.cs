@@ -1,0 +1,13 @@
+using System.Collections.Immutable;
+
+namespace TermLocus.Core.Analysis;
+
+/// <summary>A closed interval [From, To] of the swept parameter where every spec holds at every point of the band.</summary>
+/// <param name="From">Lower end, in the swept parameter's unit (solved, or the span's start).</param>
+/// <param name="To">Upper end (solved, or the span's end); To &gt;= From.</param>
+/// <param name="LimitedBy">Spec keys that become violated just outside each end (lower end's first), deduplicated.</param>
+public sealed record FeasibleInterval(double From, double To, ImmutableArray<string> LimitedBy)
+{
+    /// <summary>To - From.</summary>
+    public double Width => To - From;
+}

@@ -1,0 +1,74 @@
+using System.Collections.Immutable;
+using System.Numerics;
+using TermLocus.Core.Algebra;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.Core.Analysis;
+
+/// <summary>
+/// Checks a loop at given values against its specs, at nominal and across the tolerance box of its toleranced
+/// parameters (the swept parameter is the value being chosen, so it is not part of the box). The same function
+/// serves <c>termlocus check</c> and the workbench, so both always print the same numbers.
+/// </summary>
+public static class LoopCheck
+{
+    /// <summary>
+    /// Checks <paramref name="model"/> at <paramref name="values"/> (missing names take their nominal value).
+    /// </summary>
+    /// <exception cref="PlantFileException">The loop cannot be formed at some point of the box.</exception>
+    /// <exception cref="ArgumentException">A value names no parameter or is not finite.</exception>
+    public static LoopCheckResult Run(LoopModel model, IReadOnlyDictionary<string, double> values)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        var plant = model.Plant;
+        var full = plant.NominalValues().SetItems(values);
+        var source = new LoopPoles(model);
+        var (poles, infinite) = source.At(full);
+        var box = ToleranceBox.FromPlant(plant, plant.Loop.Sweep, full);
+        var corners = WorstCaseSearch.EvaluateCorners(box, full, source.Finite);
+        var band = SpecCheck.Limits(plant.Specs)
+            .Select(limit => Worst(limit.Spec, limit.Limit, plant.Specs, box, full, corners, source))
+            .ToImmutableArray();
+        BandMinimum? worstDamping = poles.IsEmpty ? null
+            : WorstCaseSearch.Minimize(box, full, corners, LowestDamping, source.Finite);
+        BandMinimum? worstDecay = poles.IsEmpty ? null
+            : WorstCaseSearch.Minimize(box, full, corners, LowestDecayRate, source.Finite);
+        bool stable = corners.All(c => c.Poles.All(source.IsStable)) && (worstDecay is null || worstDecay.At.Poles.All(source.IsStable));
+        return new LoopCheckResult(
+            full, poles, infinite, model.HiddenPoles(full), SpecCheck.Evaluate(plant.Specs, poles), box, band,
+            worstDamping, worstDecay, stable);
+    }
+
+    private static double LowestDamping(IReadOnlyList<Complex> poles) =>
+        poles.Count == 0 ? double.PositiveInfinity : poles.Min(p => PoleMetrics.Of(p).Damping ?? 0.0);
+
+    private static double LowestDecayRate(IReadOnlyList<Complex> poles) =>
+        poles.Count == 0 ? double.PositiveInfinity : poles.Min(p => -p.Real);
+
+    private static BandOutcome Worst(
+        SpecKind kind, double limit, Specs specs, ToleranceBox box, IReadOnlyDictionary<string, double> values,
+        ImmutableArray<BandPoint> corners, LoopPoles source)
+    {
+        var only = OnlyThis(kind, limit);
+        double Figure(IReadOnlyList<Complex> poles) =>
+            SpecCheck.Evaluate(only, poles).Outcomes is { Length: > 0 } o ? o[0].WorstRelativeMargin : double.PositiveInfinity;
+        var worst = WorstCaseSearch.Minimize(box, values, corners, Figure, source.Finite);
+        var outcome = SpecCheck.Evaluate(only, worst.At.Poles).Outcomes.FirstOrDefault();
+        return outcome is null
+            ? new BandOutcome(kind, limit, null, double.PositiveInfinity, double.PositiveInfinity, Complex.Zero, worst.At.Toleranced, worst.At.IsCorner)
+            : new BandOutcome(kind, limit, outcome.WorstActual, outcome.WorstMargin, outcome.WorstRelativeMargin,
+                outcome.WorstPole, worst.At.Toleranced, worst.At.IsCorner);
+    }
+
+    // A Specs record holding only one limit, so one figure can be searched on its own.
+    private static Specs OnlyThis(SpecKind kind, double limit) => kind switch
+    {
+        SpecKind.MinDamping => new Specs(MinDamping: limit),
+        SpecKind.MinDecayRate => new Specs(MinDecayRate: limit),
+        SpecKind.MaxTimeToHalf => new Specs(MaxTimeToHalfSeconds: limit),
+        SpecKind.MaxSettlingTime => new Specs(MaxSettlingTimeSeconds: limit),
+        SpecKind.MinNaturalFrequency => new Specs(MinNaturalFrequency: limit),
+        SpecKind.MaxNaturalFrequency => new Specs(MaxNaturalFrequency: limit),
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Not a pole limit."),
+    };
+}

@@ -1,0 +1,80 @@
+using System.Text.Json;
+using TermLocus.Core.Analysis;
+
+namespace TermLocus.Cli.Json;
+
+/// <summary>One plant's entry of the <c>termlocus.check/1</c> document.</summary>
+internal static class CheckJson
+{
+    /// <summary>Writes the plant object.</summary>
+    public static void WritePlant(Utf8JsonWriter w, PlantInput input, LoopCheckResult result)
+    {
+        w.WriteStartObject();
+        w.WriteString("file", input.File);
+        w.WriteString("title", input.Plant.Title);
+        JsonOutput.Values(w, "values", input.Plant.Parameters.Select(p => KeyValuePair.Create(p.Name, result.Values[p.Name])));
+        w.WriteString("sweep", input.Plant.Loop.Sweep);
+        w.WriteString("verdict", result.Passed ? "pass" : "fail");
+        w.WriteBoolean("stable", result.StableAcrossBand);
+        w.WriteStartArray("poles");
+        foreach (var pole in result.Poles)
+        {
+            WritePole(w, PoleMetrics.Of(pole));
+        }
+
+        w.WriteEndArray();
+        w.WriteNumber("infinite_poles", result.InfinitePoles);
+        w.WriteStartArray("hidden_poles");
+        foreach (var hidden in result.HiddenPoles)
+        {
+            JsonOutput.ComplexValue(w, hidden);
+        }
+
+        w.WriteEndArray();
+        WriteWorst(w, result);
+        WriteViolations(w, result);
+        w.WriteEndObject();
+    }
+
+    private static void WritePole(Utf8JsonWriter w, PoleMetrics m)
+    {
+        w.WriteStartObject();
+        JsonOutput.Number(w, "re", m.Pole.Real);
+        JsonOutput.Number(w, "im", m.Pole.Imaginary);
+        JsonOutput.Number(w, "damping", m.Damping);
+        JsonOutput.Number(w, "natural_frequency", m.NaturalFrequency);
+        JsonOutput.Number(w, "decay_rate", m.DecayRate);
+        JsonOutput.Number(w, "time_to_half", m.TimeToHalfSeconds);
+        w.WriteEndObject();
+    }
+
+    private static void WriteWorst(Utf8JsonWriter w, LoopCheckResult result)
+    {
+        w.WritePropertyName("worst");
+        w.WriteStartObject();
+        JsonOutput.Number(w, "damping", result.WorstDamping?.Value);
+        JsonOutput.Number(w, "decay_rate", result.WorstDecayRate?.Value);
+        // "corner" is where the damping is worst; the decay rate's own point follows (an additive field).
+        JsonOutput.Values(w, "corner", result.WorstDamping?.At.Toleranced ?? []);
+        JsonOutput.Values(w, "decay_rate_corner", result.WorstDecayRate?.At.Toleranced ?? []);
+        w.WriteEndObject();
+    }
+
+    private static void WriteViolations(Utf8JsonWriter w, LoopCheckResult result)
+    {
+        w.WriteStartArray("violations");
+        foreach (var band in result.Violated)
+        {
+            w.WriteStartObject();
+            w.WriteString("spec", band.Key);
+            JsonOutput.Number(w, "limit", band.Limit);
+            JsonOutput.Number(w, "actual", band.WorstActual);
+            JsonOutput.Number(w, "margin", band.WorstMargin);
+            JsonOutput.Complex(w, "pole", band.WorstPole);
+            JsonOutput.Values(w, "corner", band.At);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+    }
+}

@@ -1,0 +1,93 @@
+using System.Numerics;
+using CsCheck;
+using TermLocus.Core.Algebra;
+using TermLocus.Core.Analysis;
+
+namespace TermLocus.Core.Tests.Analysis;
+
+public class PoleSensitivityTests
+{
+    [Fact]
+    public void Gain_sensitivity_of_a_second_order_loop_matches_the_derivative_of_the_closed_form()
+    {
+        // P = s^2 + 2s + K: for K > 1 the poles are -1 ± j√(K - 1), so d/dK of the upper pole is j/(2√(K - 1)),
+        // j/4 at K = 5 (differentiating the closed form; common practice).
+        var family = CharacteristicFamily.FromAffine(new AffineSplit(Polynomial.FromAscending(0, 2, 1), Polynomial.One));
+        Assert.True(PoleSensitivity.TryCompute(family, 5.0, new Complex(-1, 2), out var ds));
+        Assert.Equal(0.0, ds.Real, 1e-15);
+        Assert.Equal(0.25, ds.Imaginary, 1e-15);
+    }
+
+    [Fact]
+    public void At_the_breakaway_double_root_the_sensitivity_is_undefined()
+    {
+        // At K = 1, s^2 + 2s + 1 = (s + 1)^2: the poles move as ±j√(K - 1), with no finite derivative.
+        var p = Polynomial.FromAscending(1, 2, 1);
+        Assert.False(PoleSensitivity.TryCompute(p, Polynomial.One, new Complex(-1, 0), out _));
+        Assert.False(PoleSensitivity.TryCompute(p, Polynomial.One, new Complex(-1, 1e-10), out _));
+        Assert.Throws<InvalidOperationException>(() => PoleSensitivity.Compute(p, Polynomial.One, new Complex(-1, 0)));
+    }
+
+    [Fact]
+    public void Agrees_with_finite_differences_of_the_roots_of_random_affine_families()
+    {
+        // External check: the roots themselves, found at p ± h, differenced centrally (common practice).
+        var coefficients = Gen.Double[-1.0, 1.0].Array[4];
+        Gen.Select(coefficients, coefficients, Gen.Double[-2.0, 2.0]).Sample((a, b, p0) =>
+        {
+            var split = new AffineSplit(Polynomial.FromAscending([.. a, 1.0]), Polynomial.FromAscending(b));
+            var family = CharacteristicFamily.FromAffine(split);
+            var roots = PolynomialRoots.Find(family.At(p0));
+            if (MinimumGap(roots) < 1e-2)
+            {
+                return; // near a multiple root the finite difference itself is unreliable
+            }
+
+            const double h = 1e-6;
+            var up = PolynomialRoots.Find(family.At(p0 + h));
+            var down = PolynomialRoots.Find(family.At(p0 - h));
+            foreach (var s0 in roots)
+            {
+                var s1 = Nearest(up, s0);
+                var s2 = Nearest(down, s0);
+                var numeric = (s1 - s2) / (2 * h);
+                Assert.True(PoleSensitivity.TryCompute(family, p0, s0, out var ds));
+                Assert.True(Complex.Abs(ds - numeric) <= 1e-5 * Math.Max(1.0, Complex.Abs(numeric)), $"{s0}: {ds} vs {numeric}");
+            }
+        }, iter: 200);
+    }
+
+    [Fact]
+    public void A_non_affine_family_uses_a_central_difference_in_the_parameter()
+    {
+        // P(s; p) = s^2 + p^2·s + 1, ∂P/∂p = 2p·s, so ds/dp = -2p·s0 / (2s0 + p^2) (implicit differentiation by hand).
+        var family = CharacteristicFamily.FromFunction(p => Polynomial.FromAscending(1, p * p, 1));
+        const double p0 = 0.8;
+        foreach (var s0 in PolynomialRoots.Find(family.At(p0)))
+        {
+            var expected = -2 * p0 * s0 / ((2 * s0) + (p0 * p0));
+            Assert.True(PoleSensitivity.TryCompute(family, p0, s0, out var ds));
+            Assert.True(Complex.Abs(ds - expected) <= 1e-9 * Complex.Abs(expected), $"{ds} vs {expected}");
+        }
+
+        var derivative = PoleSensitivity.ParameterDerivative(family, p0);
+        Assert.Equal(2 * p0, derivative[1], 1e-9);
+        Assert.Equal(0.0, derivative[0], 1e-9);
+    }
+
+    private static Complex Nearest(Complex[] roots, Complex target) => roots.MinBy(r => Complex.Abs(r - target));
+
+    private static double MinimumGap(Complex[] roots)
+    {
+        double gap = double.PositiveInfinity;
+        for (int i = 0; i < roots.Length; i++)
+        {
+            for (int j = i + 1; j < roots.Length; j++)
+            {
+                gap = Math.Min(gap, Complex.Abs(roots[i] - roots[j]));
+            }
+        }
+
+        return gap;
+    }
+}
