@@ -220,32 +220,40 @@ internal static class HessenbergQr
     private static void ApplyReflector(
         Span<double> a, int n, int l, int k, int nn, double x, double y, double z, double q, double r)
     {
-        bool three = k != nn - 1;
-        for (int j = k; j <= nn; j++)
+        // Row offsets hoisted: this pair of loops is where the iteration spends its time.
+        int r0 = k * n, r1 = r0 + n, r2 = r1 + n;
+        if (k != nn - 1)
         {
-            double p = a[(k * n) + j] + (q * a[((k + 1) * n) + j]);
-            if (three)
+            for (int j = k; j <= nn; j++)
             {
-                p += r * a[((k + 2) * n) + j];
-                a[((k + 2) * n) + j] -= p * z;
+                double p = a[r0 + j] + (q * a[r1 + j]) + (r * a[r2 + j]);
+                a[r2 + j] -= p * z;
+                a[r1 + j] -= p * y;
+                a[r0 + j] -= p * x;
             }
-
-            a[((k + 1) * n) + j] -= p * y;
-            a[(k * n) + j] -= p * x;
+        }
+        else
+        {
+            for (int j = k; j <= nn; j++)
+            {
+                double p = a[r0 + j] + (q * a[r1 + j]);
+                a[r1 + j] -= p * y;
+                a[r0 + j] -= p * x;
+            }
         }
 
         int last = Math.Min(nn, k + 3);
-        for (int i = l; i <= last; i++)
+        for (int i = l, row = l * n; i <= last; i++, row += n)
         {
-            double p = (x * a[(i * n) + k]) + (y * a[(i * n) + k + 1]);
-            if (three)
+            double p = (x * a[row + k]) + (y * a[row + k + 1]);
+            if (k != nn - 1)
             {
-                p += z * a[(i * n) + k + 2];
-                a[(i * n) + k + 2] -= p * r;
+                p += z * a[row + k + 2];
+                a[row + k + 2] -= p * r;
             }
 
-            a[(i * n) + k + 1] -= p * q;
-            a[(i * n) + k] -= p;
+            a[row + k + 1] -= p * q;
+            a[row + k] -= p;
         }
     }
 }

@@ -41,18 +41,18 @@ internal static class NonZeroRoots
         // Closed forms are already as good as the data when nothing was cut off; the eigenvalues are not.
         if (m > 2 || full > m)
         {
-            RootPolisher.Polish(b, re, im, options.MaxPolishSteps);
-            Repair(b[..(m + 1)], b, re, im, options);
+            double worst = RootPolisher.Polish(b, re, im, options.MaxPolishSteps);
+            Repair(b[..(m + 1)], b, re, im, worst, options);
         }
 
         return TryEmit(re, im, e, destination);
     }
 
     /// <summary>Rounds of second and third opinions while some root's backward error stays above the repair level.</summary>
-    private static void Repair(ReadOnlySpan<double> solved, ReadOnlySpan<double> full, Span<double> re, Span<double> im, RootFindingOptions options)
+    private static void Repair(
+        ReadOnlySpan<double> solved, ReadOnlySpan<double> full, Span<double> re, Span<double> im, double worst, RootFindingOptions options)
     {
-        double worst = double.PositiveInfinity;
-        for (int round = 0; round < options.MaxRepairRounds; round++)
+        for (int round = 0; round < options.MaxRepairRounds && worst > options.RepairBackwardError; round++)
         {
             ReversedRepair.Run(solved, full, re, im, options);
             double now = DeflationRepair.Run(solved, full, re, im, options);

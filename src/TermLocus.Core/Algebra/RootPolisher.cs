@@ -19,13 +19,15 @@ internal static class RootPolisher
     /// caller to mirror). A step is kept only when it lowers η and moves less than half the distance to the nearest
     /// other estimate, so a cluster never collapses onto one root and a complex root never crosses the real axis.
     /// </summary>
-    public static void Polish(ReadOnlySpan<double> b, Span<double> re, Span<double> im, int maxSteps)
+    /// <returns>The worst backward error of the estimates afterwards.</returns>
+    public static double Polish(ReadOnlySpan<double> b, Span<double> re, Span<double> im, int maxSteps)
     {
         if (maxSteps == 0)
         {
-            return;
+            return WorstBackwardError(b, re, im);
         }
 
+        double worst = 0.0;
         for (int i = 0; i < re.Length; i++)
         {
             if (im[i] < 0.0)
@@ -34,15 +36,13 @@ internal static class RootPolisher
             }
 
             double nearest2 = NearestDistanceSquared(re, im, i);
-            if (im[i] == 0.0)
-            {
-                re[i] = PolishReal(b, re[i], nearest2, maxSteps);
-            }
-            else
-            {
-                PolishComplex(b, ref re[i], ref im[i], nearest2, maxSteps);
-            }
+            double eta = im[i] == 0.0
+                ? PolishReal(b, ref re[i], nearest2, maxSteps)
+                : PolishComplex(b, ref re[i], ref im[i], nearest2, maxSteps);
+            worst = double.IsNaN(eta) ? double.PositiveInfinity : Math.Max(worst, eta);
         }
+
+        return worst;
     }
 
     /// <summary>The backward error η at t = tr + j·ti; 0 when both P(t) and the bound vanish.</summary>
@@ -67,7 +67,7 @@ internal static class RootPolisher
         return best;
     }
 
-    private static double PolishReal(ReadOnlySpan<double> b, double t, double nearest2, int maxSteps)
+    private static double PolishReal(ReadOnlySpan<double> b, ref double t, double nearest2, int maxSteps)
     {
         NewtonReal(b, t, out double step, out double eta);
         for (int k = 0; k < maxSteps && eta > RoundingLevel; k++)
@@ -87,10 +87,10 @@ internal static class RootPolisher
             (t, step, eta) = (next, nextStep, nextEta);
         }
 
-        return t;
+        return eta;
     }
 
-    private static void PolishComplex(ReadOnlySpan<double> b, ref double tr, ref double ti, double nearest2, int maxSteps)
+    private static double PolishComplex(ReadOnlySpan<double> b, ref double tr, ref double ti, double nearest2, int maxSteps)
     {
         NewtonComplex(b, tr, ti, out double sr, out double si, out double eta);
         for (int k = 0; k < maxSteps && eta > RoundingLevel; k++)
@@ -109,6 +109,8 @@ internal static class RootPolisher
 
             (tr, ti, sr, si, eta) = (nr, ni, nsr, nsi, nextEta);
         }
+
+        return eta;
     }
 
     /// <summary>Newton step P/P' at real t and the backward error there.</summary>

@@ -43,16 +43,18 @@ public class PoleSensitivityTests
                 return; // near a multiple root the finite difference itself is unreliable
             }
 
-            const double h = 1e-6;
-            var up = PolynomialRoots.Find(family.At(p0 + h));
-            var down = PolynomialRoots.Find(family.At(p0 - h));
+            double gap = MinimumGap(roots);
             foreach (var s0 in roots)
             {
-                var s1 = Nearest(up, s0);
-                var s2 = Nearest(down, s0);
-                var numeric = (s1 - s2) / (2 * h);
+                // The step keeps the pole's move to a thousandth of the root spacing; central differences at h and
+                // h/2 then disagree by about the truncation error (Richardson's idea, common practice), so curvature of
+                // a fast-moving pole is not blamed on the formula.
                 Assert.True(PoleSensitivity.TryCompute(family, p0, s0, out var ds));
-                Assert.True(Complex.Abs(ds - numeric) <= 1e-5 * Math.Max(1.0, Complex.Abs(numeric)), $"{s0}: {ds} vs {numeric}");
+                double h = 1e-3 * gap / Math.Max(1.0, Complex.Abs(ds));
+                var coarse = CentralDifference(family, p0, s0, h);
+                var fine = CentralDifference(family, p0, s0, h / 2);
+                double allowance = (1e-6 * Math.Max(1.0, Complex.Abs(fine))) + (2 * Complex.Abs(coarse - fine));
+                Assert.True(Complex.Abs(ds - fine) <= allowance, $"{s0}: {ds} vs {fine} (coarse {coarse})");
             }
         }, iter: 200);
     }
@@ -73,6 +75,13 @@ public class PoleSensitivityTests
         var derivative = PoleSensitivity.ParameterDerivative(family, p0);
         Assert.Equal(2 * p0, derivative[1], 1e-9);
         Assert.Equal(0.0, derivative[0], 1e-9);
+    }
+
+    private static Complex CentralDifference(CharacteristicFamily family, double p0, Complex s0, double h)
+    {
+        var up = Nearest(PolynomialRoots.Find(family.At(p0 + h)), s0);
+        var down = Nearest(PolynomialRoots.Find(family.At(p0 - h)), s0);
+        return (up - down) / (2 * h);
     }
 
     private static Complex Nearest(Complex[] roots, Complex target) => roots.MinBy(r => Complex.Abs(r - target));
