@@ -36,6 +36,11 @@ internal static class AxisCrossingFinder
     {
         double unit = LocusGainUnit.Of(split);
         var found = new List<Solution>();
+        if (Math.Max(split.A.Degree, split.B.Degree) < 1)
+        {
+            return found;
+        }
+
         if (split.B[0] != 0.0)
         {
             double p = split.A[0] == 0.0 ? 0.0 : -split.A[0] / split.B[0];

@@ -115,43 +115,8 @@ internal sealed class BranchMatcher
         do
         {
             used[column0] = true;
-            int row0 = rowOfColumn[column0];
-            double delta = double.PositiveInfinity;
-            int column1 = 0;
-            for (int j = 1; j <= n; j++)
-            {
-                if (used[j])
-                {
-                    continue;
-                }
-
-                double slack = cost[((row0 - 1) * n) + j - 1] - rowPotential[row0] - columnPotential[j];
-                if (slack < minSlack[j])
-                {
-                    minSlack[j] = slack;
-                    way[j] = column0;
-                }
-
-                if (minSlack[j] < delta)
-                {
-                    delta = minSlack[j];
-                    column1 = j;
-                }
-            }
-
-            for (int j = 0; j <= n; j++)
-            {
-                if (used[j])
-                {
-                    rowPotential[rowOfColumn[j]] += delta;
-                    columnPotential[j] -= delta;
-                }
-                else
-                {
-                    minSlack[j] -= delta;
-                }
-            }
-
+            var (delta, column1) = CheapestColumn(rowOfColumn[column0], column0);
+            ShiftPotentials(delta);
             column0 = column1;
         }
         while (rowOfColumn[column0] != 0);
@@ -163,6 +128,52 @@ internal sealed class BranchMatcher
             column0 = column1;
         }
         while (column0 != 0);
+    }
+
+    /// <summary>Updates the slack of every free column from row <paramref name="row0"/>; returns the least slack and
+    /// its column.</summary>
+    private (double Delta, int Column) CheapestColumn(int row0, int column0)
+    {
+        double delta = double.PositiveInfinity;
+        int column1 = 0;
+        for (int j = 1; j <= n; j++)
+        {
+            if (used[j])
+            {
+                continue;
+            }
+
+            double slack = cost[((row0 - 1) * n) + j - 1] - rowPotential[row0] - columnPotential[j];
+            if (slack < minSlack[j])
+            {
+                minSlack[j] = slack;
+                way[j] = column0;
+            }
+
+            if (minSlack[j] < delta)
+            {
+                delta = minSlack[j];
+                column1 = j;
+            }
+        }
+
+        return (delta, column1);
+    }
+
+    private void ShiftPotentials(double delta)
+    {
+        for (int j = 0; j <= n; j++)
+        {
+            if (used[j])
+            {
+                rowPotential[rowOfColumn[j]] += delta;
+                columnPotential[j] -= delta;
+            }
+            else
+            {
+                minSlack[j] -= delta;
+            }
+        }
     }
 
     private static double SquaredDistance(Complex a, Complex b)

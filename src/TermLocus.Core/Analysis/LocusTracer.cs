@@ -42,32 +42,37 @@ public static class LocusTracer
         var budget = new TraceBudget(options.MaxValues);
         var branches = ImmutableArray.CreateBuilder<LocusBranch>();
         bool complete = true;
-        double warpedSpan = warp.ToWarped(to) - warp.ToWarped(from);
         foreach (var raw in TracePieces.Split(from, to, drops.Values))
         {
-            if (TracePieces.Trim(raw, coefficients, degree, warp, scale, options.FarLimit) is not { } piece)
+            if (TracePieces.Trim(raw, coefficients, degree, warp, scale, options.FarLimit) is { } piece)
             {
-                continue;
+                var refiner = new TracePieceRefiner(coefficients, warp, degree, scale, options.MaxStepFraction, budget);
+                complete &= TracePiece(refiner, piece, warp, from, to, options.InitialIntervals, branches);
             }
-
-            double share = (warp.ToWarped(piece.To) - warp.ToWarped(piece.From)) / warpedSpan;
-            int intervals = Math.Max(4, (int)Math.Ceiling(options.InitialIntervals * share));
-            var refiner = new TracePieceRefiner(coefficients, warp, degree, scale, options.MaxStepFraction, budget);
-            var (points, pieceComplete) = refiner.Run(piece.From, piece.To, intervals);
-            complete &= pieceComplete;
-            var start = piece.FromDrop ? LocusBranchEnd.DegreeDrop : LocusBranchEnd.RangeLimit;
-            var end = piece.ToDrop ? LocusBranchEnd.DegreeDrop : LocusBranchEnd.RangeLimit;
-            branches.AddRange(points.Select(p => new LocusBranch(p, start, end)));
         }
 
         return new LocusTrace(from, to, scale, options.MaxStepFraction, branches.ToImmutable(), drops.Values,
             budget.Used, complete);
     }
 
+    /// <summary>Traces one piece with its share of the initial intervals; adds its branches, returns completeness.</summary>
+    private static bool TracePiece(TracePieceRefiner refiner, TracePieces.Piece piece, TraceParameterWarp warp,
+        double from, double to, int initialIntervals, ImmutableArray<LocusBranch>.Builder branches)
+    {
+        double share = (warp.ToWarped(piece.To) - warp.ToWarped(piece.From)) / (warp.ToWarped(to) - warp.ToWarped(from));
+        int intervals = Math.Max(4, (int)Math.Ceiling(initialIntervals * share));
+        var (points, complete) = refiner.Run(piece.From, piece.To, intervals);
+        var start = piece.FromDrop ? LocusBranchEnd.DegreeDrop : LocusBranchEnd.RangeLimit;
+        var end = piece.ToDrop ? LocusBranchEnd.DegreeDrop : LocusBranchEnd.RangeLimit;
+        branches.AddRange(points.Select(p => new LocusBranch(p, start, end)));
+        return complete;
+    }
+
     /// <summary>
     /// The closed-loop poles at swept value <paramref name="p"/>: the roots of P(s; p), sorted by real part then
     /// imaginary part; empty when P is a non-zero constant. Throws <see cref="ArgumentException"/> when P(s; p) is
-    /// the zero polynomial (every s is a root).
+    /// the zero polynomial (every s is a root) or has a coefficient that is not finite, and
+    /// <see cref="ArithmeticException"/> when the root solver does not converge.
     /// </summary>
     public static ImmutableArray<Complex> PolesAt(CharacteristicFamily family, double p)
     {

@@ -20,6 +20,10 @@ internal static class TraceCrossingFinder
     private const int GoldenIterations = 120;
     private const double GoldenTolerance = 1e-12;
 
+    /// <summary>A sign change with both |h| below this share of the scale is rounding noise of a pole that sits on
+    /// the boundary for good (a hidden pole at the origin, say), not a crossing.</summary>
+    private const double NoiseShare = 1e-10;
+
     /// <summary>Crossings closer than this share of |p| are one crossing.</summary>
     private const double SameValueShare = 1e-9;
 
@@ -37,7 +41,8 @@ internal static class TraceCrossingFinder
             {
                 var (a, b) = (points[i], points[i + 1]);
                 double ha = h(a.Pole), hb = h(b.Pole);
-                if ((ha >= 0.0) == (hb >= 0.0) || a.Pole.Imaginary + b.Pole.Imaginary < -MirrorShare * trace.Scale)
+                if ((ha >= 0.0) == (hb >= 0.0) || a.Pole.Imaginary + b.Pole.Imaginary < -MirrorShare * trace.Scale
+                    || Math.Max(Math.Abs(ha), Math.Abs(hb)) <= NoiseShare * trace.Scale)
                 {
                     continue;
                 }

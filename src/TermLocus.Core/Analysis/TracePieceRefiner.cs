@@ -131,18 +131,7 @@ internal sealed class TracePieceRefiner
     private (List<TraceSample>, List<int[]?>) Split(
         List<TraceSample> samples, List<int[]?> links, List<(int Index, double Excess, int[] Match)> bad, ref bool complete)
     {
-        var chosen = new HashSet<int>();
-        var badMatch = new Dictionary<int, int[]>();
-        int allowance = budget.Remaining;
-        foreach (var (index, _, match) in bad.OrderByDescending(b => b.Excess))
-        {
-            badMatch[index] = match;
-            if (chosen.Count < allowance)
-            {
-                chosen.Add(index);
-            }
-        }
-
+        var (chosen, badMatch) = Choose(bad);
         var nextSamples = new List<TraceSample>(samples.Count + chosen.Count);
         var nextLinks = new List<int[]?>(samples.Count + chosen.Count);
         for (int i = 0; i < samples.Count; i++)
@@ -180,6 +169,24 @@ internal sealed class TracePieceRefiner
         return (nextSamples, nextLinks);
     }
 
+    /// <summary>The bad segments the budget allows splitting, worst first, and every bad segment's pairing.</summary>
+    private (HashSet<int> Chosen, Dictionary<int, int[]> Matches) Choose(List<(int Index, double Excess, int[] Match)> bad)
+    {
+        var chosen = new HashSet<int>();
+        var matches = new Dictionary<int, int[]>();
+        int allowance = budget.Remaining;
+        foreach (var (index, _, match) in bad.OrderByDescending(b => b.Excess))
+        {
+            matches[index] = match;
+            if (chosen.Count < allowance)
+            {
+                chosen.Add(index);
+            }
+        }
+
+        return (chosen, matches);
+    }
+
     private TraceSample? Midpoint(TraceSample a, TraceSample b, int[] match)
     {
         double u = 0.5 * (a.U + b.U);
@@ -210,8 +217,8 @@ internal sealed class TracePieceRefiner
             }
         }
 
-        var roots = PolynomialRoots.Find(Polynomial.FromAscending(buffer));
-        return roots.Length == degree && roots.All(r => double.IsFinite(r.Real) && double.IsFinite(r.Imaginary))
+        var roots = new Complex[degree];
+        return PolynomialRoots.TryFind(buffer, roots, RootFindingOptions.Default, out int count) && count == degree
             ? roots
             : null;
     }

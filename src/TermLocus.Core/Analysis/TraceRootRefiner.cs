@@ -14,6 +14,9 @@ internal static class TraceRootRefiner
     /// <summary>A correction below this share of |z| counts as converged.</summary>
     private const double StepTolerance = 4e-15;
 
+    /// <summary>...or below this share of the scale, so that roots at the origin (where |z| → 0) also converge.</summary>
+    private const double StepFloor = 1e-14;
+
     /// <summary>Starting points are nudged apart by this share of the scale, off the real axis, so that coincident
     /// or real-only starts can still split into complex pairs.</summary>
     private const double StartNudge = 1e-9;
@@ -54,7 +57,7 @@ internal static class TraceRootRefiner
         Span<bool> done = n <= 64 ? stackalloc bool[n] : new bool[n];
         for (int sweep = 0; sweep < MaxSweeps; sweep++)
         {
-            if (Sweep(c, z, done))
+            if (Sweep(c, z, done, StepFloor * scale))
             {
                 return IsFinite(z) && SumMatchesVieta(c, z);
             }
@@ -64,7 +67,7 @@ internal static class TraceRootRefiner
     }
 
     /// <summary>One Gauss–Seidel sweep; true when every root had converged.</summary>
-    private static bool Sweep(ReadOnlySpan<double> c, Span<Complex> z, Span<bool> done)
+    private static bool Sweep(ReadOnlySpan<double> c, Span<Complex> z, Span<bool> done, double floor)
     {
         bool allDone = true;
         int n = z.Length;
@@ -87,7 +90,7 @@ internal static class TraceRootRefiner
             var ratio = value / slope;
             var step = ratio / (Complex.One - (ratio * Repulsion(z, i)));
             z[i] = zi - step;
-            if (step.Magnitude <= StepTolerance * z[i].Magnitude || !double.IsFinite(step.Real))
+            if (step.Magnitude <= (StepTolerance * z[i].Magnitude) + floor || !double.IsFinite(step.Real))
             {
                 done[i] = true;
             }

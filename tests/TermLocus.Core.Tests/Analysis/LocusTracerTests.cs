@@ -154,7 +154,7 @@ public class LocusTracerTests
     [Fact]
     public void Non_affine_family_starting_at_a_degree_drop_is_traced_from_the_far_limit()
     {
-        // Second-order Padé delay loop 2e^{-sτ}/(s+1) swept in τ (see LocusFactsTests): at τ = 0 the polynomial is
+        // Second-order Padé delay loop 2e^{-sτ}/(s+1) swept in τ (see StableIntervalTests): at τ = 0 the polynomial is
         // s + 3, so two of its three poles come in from infinity (Padé poles at about -6/τ, common practice).
         var family = CharacteristicFamily.FromFunction(tau =>
             (Polynomial.FromAscending(1, 1) * Polynomial.FromAscending(1, tau / 2, tau * tau / 12))
