@@ -46,23 +46,17 @@ internal static class CoreBridge
     public static ImmutableArray<LibraryItem> ScanLibrary(string folder) =>
         PlantLibrary.Scan(folder).AsParallel().AsOrdered().Select(Item).ToImmutableArray();
 
-    /// <summary>The locus over the plant's range and the swept values worth jumping to.</summary>
+    /// <summary>The locus over the plant's range and the swept values worth jumping to (the same study the verbs run).</summary>
     public static LocusAnalysis Trace(LoadedPlant loaded, TraceKey key)
     {
-        var family = loaded.Family;
-        var (from, to) = (loaded.Range.Low, loaded.Range.High);
-        var trace = LocusTracer.Trace(family, from, to);
-        var facts = LocusFacts.Compute(family, from, to);
         var specs = loaded.Plant.Specs;
-        double? zeta = specs.MinDamping is double z ? Math.Clamp(z, -1 + 1e-12, 1) : null;
-        var boundaries = SpecBoundaries.Find(
-            family, trace, zeta, SpecCheck.RequiredDecayRate(specs), specs.MinNaturalFrequency, specs.MaxNaturalFrequency);
-        var marks = boundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, KeyOf(b.Spec, specs)))
-            .Concat(facts.AxisCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
-            .Concat(facts.BreakPoints.Select(b => new SweepMark(b.Value, SweepMarkKind.BreakPoint, null)))
+        var study = LocusStudy.Run(loaded.Family, loaded.Range, specs);
+        var marks = study.SpecBoundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, KeyOf(b.Spec, specs)))
+            .Concat(study.Facts.AxisCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
+            .Concat(study.Facts.BreakPoints.Select(b => new SweepMark(b.Value, SweepMarkKind.BreakPoint, null)))
             .OrderBy(m => m.Value)
             .ToImmutableArray();
-        return new LocusAnalysis(key, trace.Branches.Select(b => b.Points).ToImmutableArray(), marks);
+        return new LocusAnalysis(key, study.Trace.Branches.Select(b => b.Points).ToImmutableArray(), marks);
     }
 
     /// <summary>Writes the value and an operating point into the plant file; returns the file as now on disk.</summary>
@@ -97,7 +91,7 @@ internal static class CoreBridge
         var plant = document.Plant;
         var model = LoopModel.Create(plant);
         var family = model.Family(plant.Loop.Sweep, plant.NominalValues());
-        var range = plant.SweptParameter.Range ?? LocusTracer.AutomaticRange(family);
+        var range = SweepSpan.For(plant, family, plant.SweptParameter.Value);
         var split = family.Affine;
         return new LoadedPlant(plant, family, range, Roots(split?.A), Roots(split?.B), document, model);
     }
@@ -114,12 +108,10 @@ internal static class CoreBridge
 
         try
         {
-            var model = LoopModel.Create(plant);
-            var poles = LocusTracer.PolesAt(model.Family(plant.Loop.Sweep, plant.NominalValues()), plant.SweptParameter.Value);
-            var misses = Misses(plant.Specs, poles);
-            bool unstable = poles.Any(p => p.Real > 0);
-            var verdict = misses.IsEmpty && !unstable ? LibraryVerdict.Pass : LibraryVerdict.Fail;
-            string? problem = misses.IsEmpty ? (unstable ? "unstable" : null) : misses[0].SpecKey;
+            // The same check as `termlocus check`: nominal and across the tolerance band.
+            var result = LoopCheck.Run(LoopModel.Create(plant), plant.NominalValues());
+            var verdict = result.Passed ? LibraryVerdict.Pass : LibraryVerdict.Fail;
+            string? problem = result.Passed ? null : result.Violated.FirstOrDefault()?.Key ?? "unstable";
             return new LibraryItem(entry.Path, entry.FileName, entry.Title, verdict, problem);
         }
         catch (Exception e) when (e is PlantFileException or ArgumentException)

@@ -64,56 +64,67 @@ public static class KeyMap
             }
         }
 
-        static KeyChord K(char c) => KeyChord.Of(c);
-        static KeyChord S(SpecialKey k) => KeyChord.Of(k);
-
-        Bind(Scope.Main, Command.StepSweepDown, "step the swept value down", S(SpecialKey.Left), K('h'));
-        Bind(Scope.Main, Command.StepSweepUp, "step the swept value up", S(SpecialKey.Right), K('l'));
-        Bind(Scope.Main, Command.FinerStep, "finer step", K('['), K('-'));
-        Bind(Scope.Main, Command.CoarserStep, "coarser step", K(']'), K('+'));
-        Bind(Scope.Main, Command.JumpToRangeStart, "go to the start of the range", S(SpecialKey.Home), K('g'));
-        Bind(Scope.Main, Command.JumpToRangeEnd, "go to the end of the range", S(SpecialKey.End), K('G'));
-        Bind(Scope.Main, Command.EnterValue, "type an exact value", K('='), S(SpecialKey.Enter));
-        Bind(Scope.Main, Command.JumpToPreviousBoundary, "previous spec boundary or crossing", K('p'), S(SpecialKey.PageUp));
-        Bind(Scope.Main, Command.JumpToNextBoundary, "next spec boundary or crossing", K('n'), S(SpecialKey.PageDown));
-        Bind(Scope.Main, Command.ZoomIn, "zoom in", K('z'));
-        Bind(Scope.Main, Command.ZoomOut, "zoom out", K('Z'));
-        Bind(Scope.Main, Command.FitView, "fit the view to the locus", K('f'));
-        Bind(Scope.Main, Command.PanLeft, "pan left", K('H'));
-        Bind(Scope.Main, Command.PanDown, "pan down", K('J'));
-        Bind(Scope.Main, Command.PanUp, "pan up", K('K'));
-        Bind(Scope.Main, Command.PanRight, "pan right", K('L'));
-        Bind(Scope.Main, Command.NextPane, "next pane", S(SpecialKey.Tab));
-        Bind(Scope.Main, Command.OpenLibrary, "open the plant library", K('o'));
-        Bind(Scope.Main, Command.SaveOperatingPoint, "save the value into the plant file", K('s'));
-        Bind(Scope.Main, Command.RevertToSavedValue, "back to the saved value", K('r'));
-        Bind(Scope.Main, Command.ShowHelp, "help", K('?'));
-        Bind(Scope.Main, Command.Quit, "quit", K('q'));
-        Bind(Scope.Main, Command.Cancel, "clear the message (Esc never quits)", S(SpecialKey.Escape));
-
-        Bind(Scope.PlanePane, Command.PanUp, "pan up", S(SpecialKey.Up));
-        Bind(Scope.PlanePane, Command.PanDown, "pan down", S(SpecialKey.Down));
-        Bind(Scope.PolesPane, Command.MoveUp, "select the previous pole", S(SpecialKey.Up), K('k'));
-        Bind(Scope.PolesPane, Command.MoveDown, "select the next pole", S(SpecialKey.Down), K('j'));
-
-        Bind(Scope.Help, Command.MoveUp, "scroll up", S(SpecialKey.Up), K('k'), S(SpecialKey.PageUp));
-        Bind(Scope.Help, Command.MoveDown, "scroll down", S(SpecialKey.Down), K('j'), S(SpecialKey.PageDown));
-        Bind(Scope.Help, Command.Cancel, "close the help", S(SpecialKey.Escape), K('?'), K('q'), S(SpecialKey.Enter));
-
-        Bind(Scope.Library, Command.MoveUp, "previous file", S(SpecialKey.Up), K('k'));
-        Bind(Scope.Library, Command.MoveDown, "next file", S(SpecialKey.Down), K('j'));
-        Bind(Scope.Library, Command.Confirm, "open the file", S(SpecialKey.Enter), S(SpecialKey.Right), K('l'));
-        Bind(Scope.Library, Command.Cancel, "close the library", S(SpecialKey.Escape), K('q'), K('o'));
-
-        Bind(Scope.ValueEntry, Command.Confirm, "set the value", S(SpecialKey.Enter));
-        Bind(Scope.ValueEntry, Command.DeleteBackward, "delete a character", S(SpecialKey.Backspace));
-        Bind(Scope.ValueEntry, Command.Cancel, "cancel", S(SpecialKey.Escape));
-
-        Bind(Scope.QuitConfirm, Command.SaveAndQuit, "save, then quit", K('s'), K('y'));
-        Bind(Scope.QuitConfirm, Command.DiscardAndQuit, "quit without saving", K('d'), K('n'));
-        Bind(Scope.QuitConfirm, Command.Cancel, "keep working", S(SpecialKey.Escape), K('c'));
-
-        Bind(Scope.Everywhere, Command.QuitNow, "quit at once (an unsaved value goes to a recovery file)", KeyChord.CtrlOf('c'));
+        BindMain(Bind);
+        BindPanesAndOverlays(Bind);
         return table.ToImmutable();
+    }
+
+    private static KeyChord K(char c) => KeyChord.Of(c);
+
+    private static KeyChord S(SpecialKey k) => KeyChord.Of(k);
+
+    private static void BindMain(Action<Scope, Command, string, KeyChord[]> bind)
+    {
+        void Bind(Command command, string description, params KeyChord[] keys) => bind(Scope.Main, command, description, keys);
+        Bind(Command.StepSweepDown, "step the swept value down", S(SpecialKey.Left), K('h'));
+        Bind(Command.StepSweepUp, "step the swept value up", S(SpecialKey.Right), K('l'));
+        Bind(Command.FinerStep, "finer step", K('['), K('-'));
+        Bind(Command.CoarserStep, "coarser step", K(']'), K('+'));
+        Bind(Command.JumpToRangeStart, "go to the start of the range", S(SpecialKey.Home), K('g'));
+        Bind(Command.JumpToRangeEnd, "go to the end of the range", S(SpecialKey.End), K('G'));
+        Bind(Command.EnterValue, "type an exact value", K('='), S(SpecialKey.Enter));
+        Bind(Command.JumpToPreviousBoundary, "previous spec boundary or crossing", K('p'), S(SpecialKey.PageUp));
+        Bind(Command.JumpToNextBoundary, "next spec boundary or crossing", K('n'), S(SpecialKey.PageDown));
+        Bind(Command.ZoomIn, "zoom in", K('z'));
+        Bind(Command.ZoomOut, "zoom out", K('Z'));
+        Bind(Command.FitView, "fit the view to the locus", K('f'));
+        Bind(Command.PanLeft, "pan left", K('H'));
+        Bind(Command.PanDown, "pan down", K('J'));
+        Bind(Command.PanUp, "pan up", K('K'));
+        Bind(Command.PanRight, "pan right", K('L'));
+        Bind(Command.NextPane, "next pane", S(SpecialKey.Tab));
+        Bind(Command.OpenLibrary, "open the plant library", K('o'));
+        Bind(Command.SaveOperatingPoint, "save the value into the plant file", K('s'));
+        Bind(Command.RevertToSavedValue, "back to the saved value", K('r'));
+        Bind(Command.ShowHelp, "help", K('?'));
+        Bind(Command.Quit, "quit", K('q'));
+        Bind(Command.Cancel, "clear the message (Esc never quits)", S(SpecialKey.Escape));
+    }
+
+    private static void BindPanesAndOverlays(Action<Scope, Command, string, KeyChord[]> bind)
+    {
+        bind(Scope.PlanePane, Command.PanUp, "pan up", [S(SpecialKey.Up)]);
+        bind(Scope.PlanePane, Command.PanDown, "pan down", [S(SpecialKey.Down)]);
+        bind(Scope.PolesPane, Command.MoveUp, "select the previous pole", [S(SpecialKey.Up), K('k')]);
+        bind(Scope.PolesPane, Command.MoveDown, "select the next pole", [S(SpecialKey.Down), K('j')]);
+
+        bind(Scope.Help, Command.MoveUp, "scroll up", [S(SpecialKey.Up), K('k'), S(SpecialKey.PageUp)]);
+        bind(Scope.Help, Command.MoveDown, "scroll down", [S(SpecialKey.Down), K('j'), S(SpecialKey.PageDown)]);
+        bind(Scope.Help, Command.Cancel, "close the help", [S(SpecialKey.Escape), K('?'), K('q'), S(SpecialKey.Enter)]);
+
+        bind(Scope.Library, Command.MoveUp, "previous file", [S(SpecialKey.Up), K('k')]);
+        bind(Scope.Library, Command.MoveDown, "next file", [S(SpecialKey.Down), K('j')]);
+        bind(Scope.Library, Command.Confirm, "open the file", [S(SpecialKey.Enter), S(SpecialKey.Right), K('l')]);
+        bind(Scope.Library, Command.Cancel, "close the library", [S(SpecialKey.Escape), K('q'), K('o')]);
+
+        bind(Scope.ValueEntry, Command.Confirm, "set the value", [S(SpecialKey.Enter)]);
+        bind(Scope.ValueEntry, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
+        bind(Scope.ValueEntry, Command.Cancel, "cancel", [S(SpecialKey.Escape)]);
+
+        bind(Scope.QuitConfirm, Command.SaveAndQuit, "save, then quit", [K('s'), K('y')]);
+        bind(Scope.QuitConfirm, Command.DiscardAndQuit, "quit without saving", [K('d'), K('n')]);
+        bind(Scope.QuitConfirm, Command.Cancel, "keep working", [S(SpecialKey.Escape), K('c')]);
+
+        bind(Scope.Everywhere, Command.QuitNow, "quit at once (an unsaved value goes to a recovery file)", [KeyChord.CtrlOf('c')]);
     }
 }

@@ -31,7 +31,7 @@ public static class LibraryPresenter
         else
         {
             int room = Math.Max(1, height - 1);
-            int nameWidth = Math.Min(Math.Max(12, width / 3), library.Items.Max(i => TextWidth.Of(SafeText.Visible(i.FileName))));
+            int nameWidth = Math.Min(Math.Max(12, width / 2 - 10), library.Items.Max(i => TextWidth.Of(SafeText.Visible(i.FileName))));
             int first = Math.Clamp(selected - room + 1, 0, Math.Max(0, library.Items.Length - room));
             for (int i = first; i < Math.Min(library.Items.Length, first + room); i++)
             {

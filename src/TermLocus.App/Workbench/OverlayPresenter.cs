@@ -26,7 +26,10 @@ public static class OverlayPresenter
     }
 
     /// <summary>The quit question: which value is unsaved, how it fares, and the three answers.</summary>
-    public static ImmutableArray<string> QuitConfirm(WorkbenchState state, int width, Glyphs glyphs)
+    public static ImmutableArray<string> QuitConfirm(WorkbenchState state, int width, Glyphs glyphs) =>
+        Fit(QuitConfirmText(state, width, glyphs), width, glyphs);
+
+    private static List<string> QuitConfirmText(WorkbenchState state, int width, Glyphs glyphs)
     {
         var lines = new List<string>();
         if (state.Session is { } session)
@@ -38,8 +41,8 @@ public static class OverlayPresenter
         }
 
         lines.Add(string.Empty);
-        lines.Add(KeyHints.Line(state with { Overlay = new QuitConfirmOverlay() }, width, glyphs));
-        return Fit(lines, width, glyphs);
+        lines.Add(KeyHints.Line(state with { Overlay = new QuitConfirmOverlay() }, int.MaxValue, glyphs));
+        return lines;
     }
 
     /// <summary>The whole screen when the terminal is below the minimum size; q (and the quit question) still work.</summary>
@@ -53,10 +56,10 @@ public static class OverlayPresenter
         if (state.Overlay is QuitConfirmOverlay)
         {
             lines.Add(string.Empty);
-            lines.AddRange(QuitConfirm(state, width, glyphs));
+            lines.AddRange(QuitConfirmText(state, width, glyphs));
         }
 
-        var wrapped = lines.SelectMany(l => l.Length == 0 ? [string.Empty] : HelpPresenter.Wrap(l, Math.Max(1, width)));
+        var wrapped = lines.SelectMany(l => l.Length == 0 ? [string.Empty] : HelpPresenter.Wrap(SafeText.Visible(l), Math.Max(1, width)));
         return wrapped.Take(Math.Max(0, height)).Select(l => TextWidth.PadRight(TextWidth.Cut(l, width), width)).ToImmutableArray();
     }
 

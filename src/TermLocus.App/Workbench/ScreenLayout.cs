@@ -57,12 +57,17 @@ public sealed record ScreenLayout(
         }
 
         int parameterRows = Math.Min(14, topRows - LegendRows);
+        int libraryRows = topRows - parameterRows - LegendRows;
+        if (libraryRows < MinimumLibraryRows)
+        {
+            // No room for a useful list: the parameters take the rows (the library overlay is still on o).
+            parameterRows = topRows - LegendRows;
+            libraryRows = 0;
+        }
+
         var parameters = new Box(plane.Width, 0, sideWidth, parameterRows);
         var legend = new Box(plane.Width, parameterRows, sideWidth, LegendRows);
-        int libraryRows = topRows - parameterRows - LegendRows;
-        var library = libraryRows >= MinimumLibraryRows
-            ? new Box(plane.Width, parameterRows + LegendRows, sideWidth, libraryRows)
-            : Box.Empty;
+        var library = libraryRows > 0 ? new Box(plane.Width, parameterRows + LegendRows, sideWidth, libraryRows) : Box.Empty;
         return new ScreenLayout(LayoutMode.Roomy, screen, plane, parameters, legend, library, poles, status);
     }
 

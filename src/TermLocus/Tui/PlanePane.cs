@@ -27,6 +27,9 @@ internal sealed class PlanePane : View
         CanFocus = false;
     }
 
+    /// <summary>How many times the plane was drawn (tests check it is redrawn only when its inputs change).</summary>
+    public int DrawCount { get; private set; }
+
     /// <summary>True when the last row shows the legend.</summary>
     public bool ShowsLegend { get; set; }
 
@@ -41,6 +44,7 @@ internal sealed class PlanePane : View
             return true;
         }
 
+        DrawCount++;
         var plane = PlanePresenter.Render(state(), columns, rows, symbols);
         for (int row = 0; row < rows; row++)
         {

@@ -79,13 +79,8 @@ public static class WorkbenchApp
         var (state, effects) = Update.Start(plantFile, folder);
         var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UtcNow, $"{Environment.UserName}@{Environment.MachineName}"));
         using IApplication app = Application.Create();
-        app.Mouse.IsMouseDisabled = noMouse;
         app.Init(DriverRegistry.Names.ANSI);
-        if (app.Driver is { } driver)
-        {
-            // Conservative colour depth: SSH and tmux rarely pass COLORTERM; we only use the 16 ANSI colours anyway.
-            driver.Force16Colors = true;
-        }
+        TerminalSetup.Configure(app, noMouse);
 
         var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
         using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);

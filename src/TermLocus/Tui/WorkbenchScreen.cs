@@ -35,6 +35,10 @@ internal sealed class WorkbenchScreen : Runnable
         Width = Dim.Fill();
         Height = Dim.Fill();
         BorderStyle = LineStyle.None;
+
+        // Nothing on this screen takes focus (keys arrive through KeyRouter). With a focusable top view Terminal.Gui
+        // re-sends "hide cursor, go home" on every loop turn, about 300 bytes a second while idle.
+        CanFocus = false;
         SetScheme(new Scheme(new Attr(Color.None, Color.None)));
 
         plane = Framed(new PlanePane(() => controller.State, controller.Receive, palette, symbols));
@@ -51,6 +55,9 @@ internal sealed class WorkbenchScreen : Runnable
     }
 
     private WorkbenchState State => controller.State;
+
+    /// <summary>How many times the s-plane has been drawn.</summary>
+    public int PlaneDrawCount => plane.DrawCount;
 
     /// <summary>The layout in use (for tests and the mouse).</summary>
     public ScreenLayout CurrentLayout => layout;

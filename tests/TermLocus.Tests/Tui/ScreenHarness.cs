@@ -20,14 +20,16 @@ internal sealed class ScreenHarness : IDisposable
     private readonly WorkbenchScreen screen;
     private readonly SessionToken? token;
 
-    private ScreenHarness(int width, int height, CanvasSymbols symbols, bool colour, string? folder)
+    private ScreenHarness(int width, int height, CanvasSymbols symbols, bool colour, string? folder, bool realEffects)
     {
         Environment.SetEnvironmentVariable("DisableRealDriverIO", "1");
         app = Application.Create();
         app.Init(DriverRegistry.Names.ANSI);
+        TerminalSetup.Configure(app, noMouse: false);
         app.Driver!.SetScreenSize(width, height);
         var (state, _) = Update.Start(null, folder);
-        Controller = new WorkbenchController(state, new InlineEffectRunner(Record), () => Quit = true);
+        var worker = new EffectWorker(new SaveContext(() => new DateTimeOffset(2026, 1, 2, 3, 4, 5, TimeSpan.Zero), "tester@bench"));
+        Controller = new WorkbenchController(state, new InlineEffectRunner(e => Record(e, realEffects ? worker : null)), () => Quit = true);
         screen = new WorkbenchScreen(Controller, Palette.For(colour), symbols);
         KeyRouter.Install(app, Controller, screen);
         token = app.Begin(screen);
@@ -41,7 +43,19 @@ internal sealed class ScreenHarness : IDisposable
     public bool Quit { get; private set; }
 
     public static ScreenHarness Start(int width, int height, CanvasSymbols symbols = CanvasSymbols.Braille, bool colour = true, string? folder = ScreenPlants.Folder) =>
-        new(width, height, symbols, colour, folder);
+        new(width, height, symbols, colour, folder, realEffects: false);
+
+    /// <summary>The workbench on a real folder with every effect really performed (reading, tracing, saving).</summary>
+    public static ScreenHarness OnFolder(int width, int height, string folder, string? plantFile = null)
+    {
+        var harness = new ScreenHarness(width, height, CanvasSymbols.Braille, true, folder, realEffects: true);
+        harness.Controller.Start(Update.Start(plantFile, folder).Effects);
+        harness.app.LayoutAndDraw();
+        return harness;
+    }
+
+    /// <summary>The workbench screen (for draw counts).</summary>
+    public WorkbenchScreen ScreenView => screen;
 
     /// <summary>Opens <see cref="ScreenPlants.SecondOrder"/> with its library and traced locus.</summary>
     public ScreenHarness WithSecondOrder(double k = 2)
@@ -50,8 +64,7 @@ internal sealed class ScreenHarness : IDisposable
         Deliver(new LibraryScanned(ScreenPlants.Folder, ScreenPlants.Library()));
         Deliver(new PlantLoaded(loaded));
         Deliver(new LocusTraced(ScreenPlants.SecondOrderLocus(loaded)));
-        Controller.Receive(new ValuePicked(k)); // a no-op value change that clears nothing; keeps the screen stable
-        Controller.Dispatch(Command.Cancel);    // clear the "opened" message
+        Controller.Dispatch(Command.Cancel); // clear the "opened" message
         app.LayoutAndDraw();
         return this;
     }
@@ -96,45 +109,9 @@ internal sealed class ScreenHarness : IDisposable
         app.Dispose();
     }
 
-    private Message? Record(Effect effect)
+    private Message? Record(Effect effect, EffectWorker? worker)
     {
         Effects.Add(effect);
-        return null;
-    }
-}
-
-/// <summary>Compares a screen with a stored snapshot; on a mismatch writes <c>NAME.actual</c> beside it.</summary>
-internal static class Snapshot
-{
-    public static void Match(string name, string screen, [CallerFilePath] string callerFile = "")
-    {
-        string folder = Path.Combine(Path.GetDirectoryName(callerFile)!, "Snapshots");
-        string expectedPath = Path.Combine(folder, name + ".txt");
-        string actualPath = Path.Combine(folder, name + ".actual");
-        string actual = Scrub(screen);
-        string? expected = File.Exists(expectedPath) ? File.ReadAllText(expectedPath) : null;
-        if (expected == actual)
-        {
-            if (File.Exists(actualPath))
-            {
-                File.Delete(actualPath);
-            }
-
-            return;
-        }
-
-        File.WriteAllText(actualPath, actual);
-        Assert.Fail(expected is null
-            ? $"no snapshot {expectedPath}; wrote {actualPath} (review it, then rename it to .txt)"
-            : $"screen differs from {expectedPath}; wrote {actualPath}");
-    }
-
-    // Trailing blanks carry no meaning; times and machine paths would make snapshots differ between runs and machines.
-    private static string Scrub(string screen)
-    {
-        var lines = screen.Replace("\r", string.Empty, StringComparison.Ordinal).Split('\n').Select(l => l.TrimEnd());
-        string text = string.Join('\n', lines).TrimEnd('\n') + "\n";
-        text = System.Text.RegularExpressions.Regex.Replace(text, @"\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d+)?Z?", "<time>");
-        return text.Replace(Path.GetTempPath().TrimEnd('/'), "<tmp>", StringComparison.Ordinal);
+        return worker?.Perform(effect);
     }
 }
