@@ -50,9 +50,10 @@ internal static class CoreBridge
     public static LocusAnalysis Trace(LoadedPlant loaded, TraceKey key)
     {
         var specs = loaded.Plant.Specs;
-        var study = LocusStudy.Run(loaded.Family, loaded.Range, specs);
+        var study = LocusStudy.Run(loaded.Family, loaded.Model?.Plane ?? LoopPlane.Continuous, loaded.Range, specs);
         var marks = study.SpecBoundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, KeyOf(b.Spec, specs)))
             .Concat(study.Facts.AxisCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
+            .Concat(study.UnitCircleCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
             .Concat(study.Facts.BreakPoints.Select(b => new SweepMark(b.Value, SweepMarkKind.BreakPoint, null)))
             .OrderBy(m => m.Value)
             .ToImmutableArray();

@@ -29,6 +29,11 @@ public static class LoopCheck
         var band = SpecCheck.Limits(plant.Specs)
             .Select(limit => Worst(limit.Spec, limit.Limit, plant.Specs, box, full, corners, source))
             .ToImmutableArray();
+        if (OvershootCheck.Worst(model, full, box) is { } overshoot)
+        {
+            band = band.Add(overshoot);
+        }
+
         BandMinimum? worstDamping = poles.IsEmpty ? null
             : WorstCaseSearch.Minimize(box, full, corners, LowestDamping, source.Finite);
         BandMinimum? worstDecay = poles.IsEmpty ? null

@@ -7,7 +7,9 @@ namespace TermLocus.Core.Analysis;
 
 /// <summary>
 /// Closed-loop poles of a loop model at a full set of values, as equivalent s-plane poles, with roots lost to
-/// infinity (a degree drop) counted rather than reported as huge numbers.
+/// infinity (a degree drop) counted rather than reported as huge numbers. In a sampled loop each root z maps to
+/// s = ln(z)/T; a root at z = 0 (a deadbeat mode, gone after one sample) has no finite equivalent and meets every
+/// pole limit, so it is left out of the list.
 /// </summary>
 internal sealed class LoopPoles(LoopModel model)
 {
@@ -22,7 +24,14 @@ internal sealed class LoopPoles(LoopModel model)
         }
 
         var roots = PolynomialRoots.FindWithInfinite(characteristic);
-        return (roots.Finite, roots.InfiniteCount);
+        if (!model.Plane.IsSampled)
+        {
+            return (roots.Finite, roots.InfiniteCount);
+        }
+
+        var mapped = roots.Finite.Where(z => z != Complex.Zero).Select(model.Plane.ToEquivalentS)
+            .OrderBy(p => p.Real).ThenBy(p => p.Imaginary).ToImmutableArray();
+        return (mapped, roots.InfiniteCount);
     }
 
     /// <summary>Finite poles only (for band searches).</summary>

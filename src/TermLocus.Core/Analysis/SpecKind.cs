@@ -24,4 +24,7 @@ public enum SpecKind
 
     /// <summary><c>max_natural_frequency</c>: every pole's ωn = |s| at most the limit (rad/s).</summary>
     MaxNaturalFrequency,
+
+    /// <summary><c>max_overshoot_pct</c>: largest step-response overshoot, percent; checked on the simulated response, not on poles.</summary>
+    MaxOvershootPct,
 }

@@ -13,6 +13,7 @@ public static class SpecKindText
         SpecKind.MaxSettlingTime => "max_settling_time",
         SpecKind.MinNaturalFrequency => "min_natural_frequency",
         SpecKind.MaxNaturalFrequency => "max_natural_frequency",
+        SpecKind.MaxOvershootPct => "max_overshoot_pct",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown spec kind."),
     };
 
@@ -24,6 +25,7 @@ public static class SpecKindText
         SpecKind.MinDecayRate => "1/s",
         SpecKind.MaxTimeToHalf or SpecKind.MaxSettlingTime => "s",
         SpecKind.MinNaturalFrequency or SpecKind.MaxNaturalFrequency => "rad/s",
+        SpecKind.MaxOvershootPct => "%",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown spec kind."),
     };
 
@@ -38,6 +40,7 @@ public static class SpecKindText
             "max_settling_time" => SpecKind.MaxSettlingTime,
             "min_natural_frequency" => SpecKind.MinNaturalFrequency,
             "max_natural_frequency" => SpecKind.MaxNaturalFrequency,
+            "max_overshoot_pct" => SpecKind.MaxOvershootPct,
             _ => null,
         };
         kind = parsed.GetValueOrDefault();

@@ -8,7 +8,8 @@ namespace TermLocus.Cli;
 /// <param name="Plant">The plant.</param>
 /// <param name="Model">Its loop model.</param>
 /// <param name="Values">Every parameter's value, overrides applied.</param>
-internal sealed record PlantInput(string File, Plant Plant, LoopModel Model, ImmutableDictionary<string, double> Values)
+/// <param name="Document">The file's bytes and hash as read (for saving back).</param>
+internal sealed record PlantInput(string File, Plant Plant, LoopModel Model, ImmutableDictionary<string, double> Values, PlantDocument Document)
 {
     /// <summary>
     /// Reads and builds <paramref name="file"/>. Throws <see cref="PlantFileException"/> for a bad file and
@@ -26,7 +27,8 @@ internal sealed record PlantInput(string File, Plant Plant, LoopModel Model, Imm
             throw new PlantFileException(new PlantFileError(file, new SourcePosition(1, 1), "no such file"));
         }
 
-        var plant = PlantFileReader.Read(file);
+        var document = PlantFileReader.ReadDocument(file);
+        var plant = document.Plant;
         foreach (var name in overrides.Keys)
         {
             if (plant.FindParameter(name) is null)
@@ -36,6 +38,6 @@ internal sealed record PlantInput(string File, Plant Plant, LoopModel Model, Imm
         }
 
         var model = LoopModel.Create(plant);
-        return new PlantInput(file, plant, model, plant.NominalValues().SetItems(overrides));
+        return new PlantInput(file, plant, model, plant.NominalValues().SetItems(overrides), document);
     }
 }

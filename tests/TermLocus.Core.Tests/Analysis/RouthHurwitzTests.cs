@@ -44,6 +44,21 @@ public class RouthHurwitzTests
         Assert.False(array.IsStable);
     }
 
+    [Theory]
+    [InlineData(new[] { 1.0, 0, 0, 0, 0, 2, 0, 2 }, 4)]
+    [InlineData(new[] { 1.0, 0, 0, 0, -2, -2, -1, -3 }, 3)]
+    public void Sparse_polynomials_needing_epsilon_in_two_rows_are_counted_by_the_limit(double[] descending, int expected)
+    {
+        // s^7 + 2s^2 + 2 and s^7 - 2s^3 - 2s^2 - s - 3: ε is needed in the s^6 and s^5 rows, and the sign of a later
+        // entry is decided by an ε-order term that a numeric ε loses to rounding. Expected counts from the ε method
+        // carried out exactly in SymPy 1.14 (rational arithmetic, limits ε → 0+), which agree with the roots.
+        var p = Polynomial.FromDescending(descending);
+        var array = RouthHurwitz.Tabulate(p);
+        Assert.Equal(new[] { 1, 2 }, array.EpsilonRows.ToArray());
+        Assert.Equal(expected, array.RightHalfPlaneCount);
+        Assert.Equal(expected, PolynomialRoots.Find(p).Count(r => r.Real > 0));
+    }
+
     [Fact]
     public void An_all_zero_row_uses_the_derivative_of_the_auxiliary_polynomial()
     {
@@ -99,8 +114,8 @@ public class RouthHurwitzTests
     {
         // Cross-check against PolynomialRoots on dense polynomials (every |coefficient| in [0.05, 1], random signs);
         // polynomials with a root within 1e-6 (relative) of the imaginary axis are skipped, as the floating-point
-        // array may legitimately call those either way. Sparse polynomials that need ε in several rows are a known
-        // weak spot of a numeric ε (see RouthHurwitz remarks) and are covered by the textbook cases only.
+        // array may legitimately call those either way. Sparse polynomials, where the ε method itself can miscount
+        // (see RouthHurwitz remarks), are covered by the worked cases above.
         var coefficient = Gen.Select(Gen.Double[0.05, 1.0], Gen.Bool, (x, negative) => negative ? -x : x);
         Gen.Int[1, 10].SelectMany(n => coefficient.Array[n + 1]).Sample(c =>
         {

@@ -151,7 +151,10 @@ public class SpecCheckTests
             Assert.Equal(kind, parsed);
         }
 
-        Assert.False(SpecKindText.TryParseKey("max_overshoot_pct", out _));
+        // Overshoot is a limit of its own kind, but it is checked on the simulated response, never on the poles.
+        Assert.True(SpecKindText.TryParseKey("max_overshoot_pct", out var overshoot));
+        Assert.Empty(SpecCheck.Limits(new TermLocus.Core.Plants.Specs(MaxOvershootPct: 10)));
+        Assert.Equal("%", overshoot.Unit());
         Assert.Equal("1/s", SpecKind.MinDecayRate.Unit());
     }
 }

@@ -1,0 +1,65 @@
+using System.Collections.Immutable;
+using System.Numerics;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.Core.Analysis;
+
+/// <summary>
+/// The <c>max_overshoot_pct</c> limit, checked on the simulated closed-loop step response (not on the poles) at the
+/// given values and at every corner of the tolerance box. Interior points of the box are not searched for this
+/// limit: each point costs a full simulation.
+/// </summary>
+public static class OvershootCheck
+{
+    /// <summary>
+    /// The worst overshoot over the nominal point and the corners, as a band outcome; null when the specs set no
+    /// overshoot limit or the loop has no reference-to-output path (a file giving only the characteristic polynomial).
+    /// An unstable point counts as an unbounded overshoot (margin minus infinity, actual null).
+    /// </summary>
+    public static BandOutcome? Worst(LoopModel model, IReadOnlyDictionary<string, double> values, ToleranceBox box)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        if (model.Plant.Specs.MaxOvershootPct is not double limit)
+        {
+            return null;
+        }
+
+        var work = new Dictionary<string, double>(values, StringComparer.Ordinal);
+        BandOutcome? worst = Measure(model, work, limit, ImmutableDictionary<string, double>.Empty, atCorner: false);
+        if (worst is null)
+        {
+            return null;
+        }
+
+        for (int c = 0; c < box.CornerCount; c++)
+        {
+            box.WriteCorner(c, work);
+            var outcome = Measure(model, work, limit, box.Corner(c), atCorner: true);
+            if (outcome is not null && outcome.WorstMargin < worst.WorstMargin)
+            {
+                worst = outcome;
+            }
+        }
+
+        return worst;
+    }
+
+    private static BandOutcome? Measure(
+        LoopModel model, IReadOnlyDictionary<string, double> values, double limit, ImmutableDictionary<string, double> at, bool atCorner)
+    {
+        var response = LoopResponse.Analyse(model, values);
+        if (!response.IsAvailable)
+        {
+            return null;
+        }
+
+        Complex pole = response.Estimate?.Poles.FirstOrDefault() ?? Complex.Zero;
+        if (response.Figures?.OvershootPct is not double overshoot)
+        {
+            return new BandOutcome(SpecKind.MaxOvershootPct, limit, null, double.NegativeInfinity, double.NegativeInfinity, pole, at, atCorner);
+        }
+
+        double margin = limit - overshoot;
+        return new BandOutcome(SpecKind.MaxOvershootPct, limit, overshoot, margin, limit == 0 ? margin : margin / limit, pole, at, atCorner);
+    }
+}

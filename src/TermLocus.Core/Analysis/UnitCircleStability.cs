@@ -1,0 +1,64 @@
+using System.Collections.Immutable;
+using System.Numerics;
+using TermLocus.Core.Algebra;
+
+namespace TermLocus.Core.Analysis;
+
+/// <summary>
+/// Stability facts of a sampled loop, whose characteristic polynomial is in z: the swept values where a root crosses
+/// the unit circle, and the sub-ranges where every root lies strictly inside it. Ends are solved by bisection on the
+/// largest root magnitude to <see cref="SignIntervals.DefaultRelTol"/>, bracketed on a uniform grid refined by the
+/// values where the family drops degree.
+/// </summary>
+public static class UnitCircleStability
+{
+    /// <summary>Grid points used to bracket crossings.</summary>
+    public const int GridPoints = 801;
+
+    /// <summary>
+    /// The stable sub-ranges of [<paramref name="from"/>, <paramref name="to"/>], ascending. Throws
+    /// <see cref="ArgumentException"/> when from &gt;= to.
+    /// </summary>
+    public static ImmutableArray<StableInterval> StableIntervals(CharacteristicFamily family, double from, double to) =>
+        [.. SignIntervals.Find(p => Margin(family, p), from, to, GridPoints).Select(i => new StableInterval(i.From, i.To))];
+
+    /// <summary>
+    /// The unit-circle crossings inside the span: the swept value and the crossing root's angle ωT in radians
+    /// (0 at z = 1, π at z = -1), ascending by value.
+    /// </summary>
+    public static ImmutableArray<(double Value, double AngleRadians)> Crossings(CharacteristicFamily family, double from, double to)
+    {
+        var result = ImmutableArray.CreateBuilder<(double, double)>();
+        foreach (var interval in StableIntervals(family, from, to))
+        {
+            foreach (double end in new[] { interval.From, interval.To })
+            {
+                if (end > from && end < to)
+                {
+                    var z = PolynomialRoots.Find(family.At(end)).MaxBy(Complex.Abs);
+                    result.Add((end, Math.Abs(z.Phase)));
+                }
+            }
+        }
+
+        return result.ToImmutable();
+    }
+
+    // Positive when every root is strictly inside the unit circle.
+    private static double Margin(CharacteristicFamily family, double p)
+    {
+        var polynomial = family.At(p);
+        if (polynomial.IsZero)
+        {
+            return double.NaN;
+        }
+
+        var roots = PolynomialRoots.FindWithInfinite(polynomial);
+        if (roots.InfiniteCount > 0)
+        {
+            return -1.0; // a root at infinity is outside the circle
+        }
+
+        return roots.Finite.IsEmpty ? 1.0 : 1.0 - roots.Finite.Max(Complex.Abs);
+    }
+}
