@@ -1,0 +1,60 @@
+using System.Collections.Immutable;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.Core.Analysis;
+
+/// <summary>Which limits end a feasible interval: those violated just outside each of its ends.</summary>
+internal static class DesignLimits
+{
+    /// <summary>Steps outside an end tried in turn, as shares of the span's scale, until some limit fails.</summary>
+    private static readonly double[] StepShares = [1e-10, 1e-9, 1e-8, 1e-7, 1e-6, 1e-5, 1e-4];
+
+    /// <summary>
+    /// The interval [<paramref name="from"/>, <paramref name="to"/>] with the keys violated just below
+    /// <paramref name="from"/> and just above <paramref name="to"/> (lower end's first,
+    /// deduplicated; in <see cref="SpecKind"/> order, then <see cref="DesignMargin.StabilityKey"/>). An end at the
+    /// span's end is limited by the span, not by a spec, and adds nothing.
+    /// </summary>
+    public static FeasibleInterval Describe(DesignPoints points, Interval span, double from, double to)
+    {
+        ImmutableArray<string> below = from > span.Low ? [.. ViolatedNear(points, span, from, -1.0)] : [];
+        ImmutableArray<string> above = to < span.High ? [.. ViolatedNear(points, span, to, +1.0)] : [];
+        return new FeasibleInterval(from, to, [.. below.Concat(above).Distinct(StringComparer.Ordinal)])
+        {
+            FromLimitedBy = below,
+            ToLimitedBy = above,
+        };
+    }
+
+    private static List<string> ViolatedNear(DesignPoints points, Interval span, double end, double direction)
+    {
+        double scale = RobustDesign.Scale(span);
+        foreach (double share in StepShares)
+        {
+            double p = Math.Clamp(end + (direction * share * scale), span.Low, span.High);
+            var margins = points.At(p);
+            if (margins.Feasibility >= 0.0 || !margins.Formed)
+            {
+                continue;
+            }
+
+            var keys = new List<string>();
+            for (int k = 0; k < points.Limits.Count; k++)
+            {
+                if (margins.Relative[k] < 0.0)
+                {
+                    keys.Add(points.Limits[k].Spec.Key());
+                }
+            }
+
+            if (!margins.Stable)
+            {
+                keys.Add(DesignMargin.StabilityKey);
+            }
+
+            return keys;
+        }
+
+        return [];
+    }
+}
