@@ -6,7 +6,10 @@ namespace TermLocus.Core.Analysis;
 /// <summary>Which limits end a feasible interval: those violated just outside each of its ends.</summary>
 internal static class DesignLimits
 {
-    /// <summary>Steps outside an end tried in turn, as shares of the span's scale, until some limit fails.</summary>
+    /// <summary>
+    /// Steps outside an end tried in turn until some limit fails, as shares of max(|end|, 1e-3 · scale), the base the
+    /// end was solved against (<see cref="SignIntervals"/>): the first is a hundred times its tolerance.
+    /// </summary>
     private static readonly double[] StepShares = [1e-10, 1e-9, 1e-8, 1e-7, 1e-6, 1e-5, 1e-4];
 
     /// <summary>
@@ -28,7 +31,7 @@ internal static class DesignLimits
 
     private static List<string> ViolatedNear(DesignPoints points, Interval span, double end, double direction)
     {
-        double scale = RobustDesign.Scale(span);
+        double scale = Math.Max(Math.Abs(end), SignIntervals.ZeroFloorShare * RobustDesign.Scale(span));
         foreach (double share in StepShares)
         {
             double p = Math.Clamp(end + (direction * share * scale), span.Low, span.High);

@@ -14,8 +14,8 @@ namespace TermLocus.Core.Analysis;
 /// (negative when some pole is not strictly stable). Its sign changes are bracketed on a uniform grid of
 /// <see cref="GridPoints"/> values plus every point's own spec boundaries and stability crossings (the exact values
 /// the locus engine solves, see <see cref="SpecBoundaries"/>, <see cref="LocusFacts"/>), and the midpoints next to
-/// them; then each end is bisected to <see cref="SignIntervals.DefaultRelTol"/> of the span's scale (far better than
-/// 1e-9 relative). Between consecutive hints the feasibility cannot change sign, so intervals narrower than a grid
+/// them; then each end is bisected to <see cref="SignIntervals.DefaultRelTol"/> of its own value (far better than
+/// 1e-9 relative; an end at 0 to 1e-15 of the span's scale). Between consecutive hints the feasibility cannot change sign, so intervals narrower than a grid
 /// step are found too, as long as the locus engine finds each point's boundaries.</para>
 /// <para>The recommended value maximises the smallest relative margin (the slowest decay rate, 1/s, when the file
 /// sets no pole limits) over the same points inside the widest interval: sampled at <see cref="RecommendSamples"/>
