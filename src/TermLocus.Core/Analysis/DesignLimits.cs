@@ -29,35 +29,56 @@ internal static class DesignLimits
         };
     }
 
+    // The keys violated at the first step outside the end where anything fails, and at the step after it: two limits
+    // that fail together are both named although the share that makes stability strict (or rounding) lets one of
+    // them fail a hair before the other.
     private static List<string> ViolatedNear(DesignPoints points, Interval span, double end, double direction)
     {
         double scale = Math.Max(Math.Abs(end), SignIntervals.ZeroFloorShare * RobustDesign.Scale(span));
-        foreach (double share in StepShares)
+        for (int i = 0; i < StepShares.Length; i++)
         {
-            double p = Math.Clamp(end + (direction * share * scale), span.Low, span.High);
-            var margins = points.At(p);
-            if (margins.Feasibility >= 0.0 || !margins.Formed)
+            var keys = KeysAt(points, Math.Clamp(end + (direction * StepShares[i] * scale), span.Low, span.High));
+            if (keys.Count == 0)
             {
                 continue;
             }
 
-            var keys = new List<string>();
-            for (int k = 0; k < points.Limits.Count; k++)
+            if (i + 1 < StepShares.Length)
             {
-                if (margins.Relative[k] < 0.0)
-                {
-                    keys.Add(points.Limits[k].Spec.Key());
-                }
+                keys.UnionWith(KeysAt(points, Math.Clamp(end + (direction * StepShares[i + 1] * scale), span.Low, span.High)));
             }
 
-            if (!margins.Stable)
-            {
-                keys.Add(DesignMargin.StabilityKey);
-            }
-
-            return keys;
+            return [.. Ordered(points).Where(keys.Contains)];
         }
 
         return [];
+    }
+
+    private static IEnumerable<string> Ordered(DesignPoints points) =>
+        points.Limits.Select(l => l.Spec.Key()).Append(DesignMargin.StabilityKey);
+
+    private static HashSet<string> KeysAt(DesignPoints points, double p)
+    {
+        var keys = new HashSet<string>(StringComparer.Ordinal);
+        var margins = points.At(p);
+        if (!margins.Formed || margins.Feasibility >= 0.0)
+        {
+            return keys;
+        }
+
+        for (int k = 0; k < points.Limits.Count; k++)
+        {
+            if (margins.Relative[k] < 0.0)
+            {
+                keys.Add(points.Limits[k].Spec.Key());
+            }
+        }
+
+        if (!margins.Stable)
+        {
+            keys.Add(DesignMargin.StabilityKey);
+        }
+
+        return keys;
     }
 }
