@@ -60,7 +60,8 @@ public sealed class LoopModel
     /// The characteristic polynomial (ascending coefficients in s) at the given values: its roots are the closed-loop
     /// poles, hidden ones included. Not normalised: the leading coefficient is whatever the fractions give.
     /// </summary>
-    /// <exception cref="PlantFileException">The loop cannot be formed at these values, or the polynomial is identically zero.</exception>
+    /// <exception cref="PlantFileException">The loop cannot be formed at these values, the polynomial is identically
+    /// zero, or its leading coefficient is so small next to the others that a pole would lie beyond 1e300 rad/s.</exception>
     public Polynomial Characteristic(IReadOnlyDictionary<string, double> values) => parts.Characteristic(slots.Resolve(values));
 
     /// <summary>Like <see cref="Characteristic"/>, returning the located error instead of throwing.</summary>

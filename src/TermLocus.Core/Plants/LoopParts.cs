@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using System.Numerics;
 using TermLocus.Core.Algebra;
 using TermLocus.Core.Analysis;
@@ -12,6 +13,9 @@ namespace TermLocus.Core.Plants;
 /// </summary>
 internal sealed class LoopParts
 {
+    /// <summary>Largest closed-loop pole magnitude, rad/s, that <see cref="Characteristic"/> lets through.</summary>
+    public const double MaxPoleMagnitude = 1e300;
+
     private readonly LoopExpression?[] path;
     private readonly LoopExpression? given;
     private readonly FeedbackSign feedback;
@@ -60,7 +64,7 @@ internal sealed class LoopParts
     }
 
     public Polynomial Characteristic(double[] slots) =>
-        given is not null ? GivenCharacteristic(slots) : FromLoopGain(LoopGain(slots));
+        WithPolesInRange(given is not null ? GivenCharacteristic(slots) : FromLoopGain(LoopGain(slots)));
 
     /// <summary>C·G·H formed as (C·G)·H, nothing cancelled.</summary>
     public Fraction LoopGain(double[] slots) => Product(Evaluate(path, slots));
@@ -154,6 +158,26 @@ internal sealed class LoopParts
         return gain.IsUsable
             ? gain
             : throw new PlantFileException(blame.ErrorAt(0, "the loop gain controller*plant*sensor is not finite for these parameter values"));
+    }
+
+    // A leading coefficient that is negligible next to the others (a sub-normal J, say) puts poles beyond what a
+    // double holds: the root finder would return infinities. Fujiwara's bound, 2·max_k |a(n-k)/a(n)|^(1/k), taken in
+    // logarithms so that it cannot overflow, is an upper bound of every root's magnitude.
+    private Polynomial WithPolesInRange(Polynomial p)
+    {
+        int n = p.Degree;
+        double logLeading = Math.Log(Math.Abs(p.Leading));
+        double logBound = double.NegativeInfinity;
+        for (int k = 1; k <= n; k++)
+        {
+            double c = Math.Abs(p[n - k]) / (k == n ? 2.0 : 1.0);
+            logBound = c == 0.0 ? logBound : Math.Max(logBound, (Math.Log(c) - logLeading) / k);
+        }
+
+        return logBound + Math.Log(2.0) <= Math.Log(MaxPoleMagnitude)
+            ? p
+            : throw new PlantFileException(blame.ErrorAt(0, string.Create(CultureInfo.InvariantCulture,
+                $"the characteristic polynomial's leading coefficient ({p.Leading:G3}) is negligible next to the others: a closed-loop pole would lie beyond {MaxPoleMagnitude:G1} rad/s for these parameter values")));
     }
 
     private Polynomial Checked(Polynomial p, string what)
