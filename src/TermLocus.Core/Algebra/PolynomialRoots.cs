@@ -20,6 +20,8 @@ namespace TermLocus.Core.Algebra;
 /// coefficients cannot even be stored exactly in doubles, and the stored polynomial's roots near 10..20 differ from
 /// the integers in the second or third digit; the roots returned are nevertheless exact roots of a polynomial within
 /// a few rounding units of the stored one.
+/// Range: roots past the double range, and roots spread so widely (hundreds of decades, e.g. -s^5 + 5e184·s^2 +
+/// 6e-277) that the scaled companion matrix overflows, are not found: Find throws, TryFind returns false.
 /// </remarks>
 public static class PolynomialRoots
 {

@@ -61,7 +61,9 @@ public sealed class LoopModel
     /// poles, hidden ones included. Not normalised: the leading coefficient is whatever the fractions give.
     /// </summary>
     /// <exception cref="PlantFileException">The loop cannot be formed at these values, the polynomial is identically
-    /// zero, or its leading coefficient is so small next to the others that a pole would lie beyond 1e300 rad/s.</exception>
+    /// zero, or its roots cannot be computed in double precision (a leading coefficient negligible next to the others,
+    /// coefficients spread over hundreds of decades); every polynomial returned has roots that
+    /// <see cref="PolynomialRoots.Find(Polynomial)"/> finds.</exception>
     public Polynomial Characteristic(IReadOnlyDictionary<string, double> values) => parts.Characteristic(slots.Resolve(values));
 
     /// <summary>Like <see cref="Characteristic"/>, returning the located error instead of throwing.</summary>

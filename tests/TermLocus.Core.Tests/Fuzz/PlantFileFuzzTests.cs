@@ -7,7 +7,7 @@ namespace TermLocus.Core.Tests.Fuzz;
 /// characteristic at the nominal values, its roots and the spec check. The only allowed outcomes are success or a
 /// one-line, located <see cref="TermLocus.Core.Plants.PlantFileException"/> without control characters (plant-file
 /// design, "Expressions"; terminal-ux design point 8), each within <see cref="FuzzSettings.CaseTimeout"/>.
-/// CI runs 3000 cases; set TERMLOCUS_FUZZ_ITERATIONS for a long run.
+/// CI runs 1500 cases; set TERMLOCUS_FUZZ_ITERATIONS for a long run.
 /// </summary>
 public sealed class PlantFileFuzzTests
 {
@@ -25,7 +25,7 @@ public sealed class PlantFileFuzzTests
                 }
             }, file.ToString),
             seed: FuzzSettings.Seed,
-            iter: FuzzSettings.Iterations(3000),
+            iter: FuzzSettings.Iterations(1500),
             threads: FuzzSettings.Threads,
             print: f => f.ToString());
         FuzzSettings.Report($"plant files: {Interlocked.Read(ref loaded)} of {session.Cases} loaded and solved");

@@ -12,8 +12,15 @@ internal static partial class PlantFileMutations
 {
     private static readonly Gen<double> Where = Gen.Double[0.0, 1.0];
 
-    private static readonly Gen<Mutation> OneMutation = Gen.Frequency(
+    // Long runs (lines and files of 10 kB to 1 MB) cost a hundred times a short edit, so they come rarely.
+    private static readonly Gen<Mutation> LongRun =
+        Gen.Select(Where, Gen.OneOfConst("x", "(", "[", "{", "a.", "1+", "\\\\", "#", " ", "\"", "Kt*", "[[x]]\n"), Gen.Int[1, 200_000],
+            (w, t, n) => new Mutation($"insert '{t}' x{n} at {w:F4}", b => Insert(b, w, Utf8(string.Concat(Enumerable.Repeat(t, n))))));
+
+    private static readonly Gen<Mutation> ShortEdit = Gen.Frequency(
         (3, Gen.Select(Where, Gen.Int[0, 7], (w, bit) => new Mutation($"flip bit {bit} at {w:F4}", b => FlipBit(b, w, bit)))),
+        (1, Gen.Select(Where, Gen.OneOfConst("x", "(", "[", "a.", "1+", "-", "{a="), Gen.Int[50, 3000],
+            (w, t, n) => new Mutation($"insert '{t}' x{n} at {w:F4}", b => Insert(b, w, Utf8(string.Concat(Enumerable.Repeat(t, n))))))),
         (3, Gen.Select(Where, Gen.Byte, (w, v) => new Mutation($"set byte 0x{v:X2} at {w:F4}", b => SetByte(b, w, v)))),
         (4, Gen.Select(Where, Gen.OneOfConst(HostileTokens.FileTokens), (w, t) => new Mutation($"insert '{t}' at {w:F4}", b => Insert(b, w, Utf8(t))))),
         (3, Gen.Select(Where, Gen.OneOfConst(HostileTokens.Numbers), (w, t) => new Mutation($"insert number '{t}' at {w:F4}", b => Insert(b, w, Utf8(t))))),
@@ -24,9 +31,11 @@ internal static partial class PlantFileMutations
         (4, Gen.Select(Where, Gen.OneOfConst(HostileTokens.Numbers), (w, t) => new Mutation($"number at {w:F4} becomes '{t}'", b => ReplaceNumber(b, w, t)))),
         (5, Gen.Select(Where, ExpressionGenerators.Any, (w, e) => new Mutation($"expression at {w:F4} becomes \"{e}\"", b => ReplaceExpression(b, w, e)))),
         (1, Gen.Select(Where, Gen.OneOfConst("\r\n", "\r", "\n\r", "\r\r\n"), (w, nl) => new Mutation($"new lines after {w:F4} become {Escape(nl)}", b => NewLines(b, w, nl)))),
-        (1, Gen.Select(Where, Gen.OneOfConst("x", "(", "[", "{", "a.", "1+", "\\\\", "#", " ", "\"", "Kt*"), Gen.Int[1, 200_000],
-            (w, t, n) => new Mutation($"insert '{t}' x{n} at {w:F4}", b => Insert(b, w, Utf8(string.Concat(Enumerable.Repeat(t, n))))))),
+
         (1, Gen.Select(Where, Gen.Byte[0x80, 0xFF].Array[1, 4], (w, v) => new Mutation($"insert bytes {Convert.ToHexString(v)} at {w:F4}", b => Insert(b, w, v)))));
+
+    // Declared after the generators it draws from: static fields initialise in order.
+    private static readonly Gen<Mutation> OneMutation = Gen.Frequency((200, ShortEdit), (1, LongRun));
 
     /// <summary>A mutated demo plant, with the list of mutations that made it.</summary>
     public static readonly Gen<FuzzFile> File = Gen.Select(

@@ -25,4 +25,11 @@ internal static class RootBounds
 
         return bound + Math.Log10(2.0);
     }
+
+    /// <summary>log10 of the largest over the smallest magnitude of the non-zero coefficients.</summary>
+    public static double Log10Spread(Polynomial p)
+    {
+        var logs = p.Coefficients.Where(c => c != 0.0).Select(c => Math.Log10(Math.Abs(c))).ToArray();
+        return logs.Max() - logs.Min();
+    }
 }
