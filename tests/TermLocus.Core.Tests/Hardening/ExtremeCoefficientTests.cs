@@ -18,6 +18,9 @@ public sealed class ExtremeCoefficientTests
         // -s^5 + 5e184·s^2 + 6.4e-277: roots near 3.7e61 (three) and 1.1e-231 (two); the geometric-mean scaling
         // leaves monic companion entries near 1e350 (found by the expression fuzz run, seed 3Tw1tra1dP55).
         { "roots spread over 290 decades", [6.449725439999997E-277, 0, 5E+184, 0, 0, -1] },
+        // -1e267·s^3 + 1.2639e-77·s^2 - 5.3e-155·s + 7.5e-233: the companion balancing factor overflowed to infinity
+        // and the balancing loop never ended (a hang found by the expression fuzz run, seed d9pb7k9tCbS2).
+        { "balancing past overflow", [7.477809159699999E-233, -5.3248107E-155, 1.2639E-77, -1E+267] },
     };
 
     [Theory]
@@ -25,14 +28,18 @@ public sealed class ExtremeCoefficientTests
     public void The_root_finder_refuses_instead_of_returning_infinities(string what, double[] ascending)
     {
         var p = Polynomial.FromAscending(ascending);
+        using var session = new Fuzz.FuzzSession("extreme " + what);
 
-        bool found = PolynomialRoots.TryFind(p, out var roots);
-
-        Assert.True(!found || roots.All(r => double.IsFinite(r.Real) && double.IsFinite(r.Imaginary)), what);
-        if (!found)
+        // Under the fuzz runner's time limit, so that a hang fails the test instead of stalling the run.
+        session.Run(() =>
         {
-            Assert.Throws<ArithmeticException>(() => PolynomialRoots.Find(p));
-        }
+            bool found = PolynomialRoots.TryFind(p, out var roots);
+            Assert.True(!found || roots.All(r => double.IsFinite(r.Real) && double.IsFinite(r.Imaginary)), what);
+            if (!found)
+            {
+                Assert.Throws<ArithmeticException>(() => PolynomialRoots.Find(p));
+            }
+        }, () => what);
     }
 
     [Theory]
