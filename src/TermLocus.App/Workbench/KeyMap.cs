@@ -125,6 +125,6 @@ public static class KeyMap
         bind(Scope.QuitConfirm, Command.DiscardAndQuit, "quit without saving", [K('d'), K('n')]);
         bind(Scope.QuitConfirm, Command.Cancel, "keep working", [S(SpecialKey.Escape), K('c')]);
 
-        bind(Scope.Everywhere, Command.QuitNow, "quit at once (an unsaved value goes to a recovery file)", [KeyChord.CtrlOf('c')]);
+        bind(Scope.Everywhere, Command.QuitNow, "quit at once, keeping an unsaved value in a recovery file", [KeyChord.CtrlOf('c')]);
     }
 }

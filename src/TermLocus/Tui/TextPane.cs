@@ -1,24 +1,51 @@
 using Terminal.Gui.ViewBase;
+using TextWidth = TermLocus.App.Text.TextWidth;
 
 namespace TermLocus.Tui;
 
 /// <summary>
-/// A pane that draws the lines its content function gives for its current size, each in its tone. It never reads
-/// anything back; it is redrawn only when the screen says its inputs changed.
+/// A pane that draws the lines its content function gives for its current size, each in its tone, optionally inside
+/// a frame with a heading. It remembers what it drew and writes only the lines that changed, so a key press sends
+/// a few lines rather than the pane; <see cref="Invalidate"/> makes the next draw complete.
 /// </summary>
 internal sealed class TextPane : View
 {
     private readonly Palette palette;
+    private readonly FrameGlyphs? frame;
+    private string heading = string.Empty;
+    private List<StyledLine[]>? last;
+    private (int Width, int Height) lastSize;
 
-    public TextPane(Palette palette, Func<int, int, IReadOnlyList<StyledLine>> content)
+    public TextPane(Palette palette, FrameGlyphs? frame, Func<int, int, IReadOnlyList<StyledLine>> content)
     {
         this.palette = palette;
+        this.frame = frame;
         Content = content;
         CanFocus = false;
     }
 
-    /// <summary>Lines for a width and height (in cells).</summary>
+    /// <summary>Lines for the inner width and height (in cells).</summary>
     public Func<int, int, IReadOnlyList<StyledLine>> Content { get; set; }
+
+    /// <summary>The heading shown in the frame's top edge.</summary>
+    public string Heading
+    {
+        get => heading;
+        set
+        {
+            if (value != heading)
+            {
+                heading = value;
+                SetNeedsDraw();
+            }
+        }
+    }
+
+    /// <summary>Forget what is on screen: the next draw writes every cell (after something drew over the pane).</summary>
+    public void Invalidate() => last = null;
+
+    // The pane paints every cell itself; clearing first would make every cell count as changed.
+    protected override bool OnClearingViewport() => true;
 
     protected override bool OnDrawingContent(DrawContext? context)
     {
@@ -29,14 +56,55 @@ internal sealed class TextPane : View
             return true;
         }
 
-        var lines = Content(width, height);
-        for (int row = 0; row < height; row++)
+        var rows = Rows(width, height);
+        bool full = last is null || lastSize != (width, height);
+        for (int row = 0; row < rows.Count; row++)
         {
-            var line = row < lines.Count ? lines[row] : new StyledLine(string.Empty, Tone.Normal);
-            SetAttribute(palette.For(line.Tone));
-            AddStr(0, row, TermLocus.App.Text.TextWidth.PadRight(line.Text, width));
+            if (!full && last![row].AsSpan().SequenceEqual(rows[row]))
+            {
+                continue;
+            }
+
+            int column = 0;
+            foreach (var segment in rows[row])
+            {
+                SetAttribute(palette.For(segment.Tone));
+                AddStr(column, row, segment.Text);
+                column += TextWidth.Of(segment.Text);
+            }
         }
 
+        last = rows;
+        lastSize = (width, height);
         return true;
+    }
+
+    private List<StyledLine[]> Rows(int width, int height)
+    {
+        bool framed = frame is not null && width >= 2 && height >= 2;
+        int innerWidth = framed ? width - 2 : width;
+        int innerHeight = framed ? height - 2 : height;
+        var lines = Content(innerWidth, innerHeight);
+        var rows = new List<StyledLine[]>(height);
+        if (framed)
+        {
+            rows.Add([new StyledLine(frame!.Top(heading, width), Tone.Normal)]);
+        }
+
+        for (int i = 0; i < innerHeight; i++)
+        {
+            var line = i < lines.Count ? lines[i] : new StyledLine(string.Empty, Tone.Normal);
+            var text = new StyledLine(TextWidth.PadRight(line.Text, innerWidth), line.Tone);
+            rows.Add(framed
+                ? [new StyledLine(frame!.Vertical, Tone.Normal), text, new StyledLine(frame.Vertical, Tone.Normal)]
+                : [text]);
+        }
+
+        if (framed)
+        {
+            rows.Add([new StyledLine(frame!.Bottom(width), Tone.Normal)]);
+        }
+
+        return rows;
     }
 }

@@ -41,14 +41,15 @@ internal sealed class WorkbenchScreen : Runnable
         CanFocus = false;
         SetScheme(new Scheme(new Attr(Color.None, Color.None)));
 
-        plane = Framed(new PlanePane(() => controller.State, controller.Receive, palette, symbols));
-        parameters = Framed(new TextPane(palette, (w, h) => PaneContent.Parameters(State, w, h, glyphs)), "parameter");
-        legend = Framed(new TextPane(palette, (w, _) => PaneContent.Legend(symbols, w)), "legend");
-        library = Framed(new TextPane(palette, (w, h) => PaneContent.Library(State, null, w, h, glyphs)), "library");
-        poles = Framed(new TextPane(palette, (w, h) => PaneContent.Poles(State, w, h, glyphs)));
-        status = new TextPane(palette, (w, _) => PaneContent.Status(State, w, glyphs));
-        overlay = Framed(new TextPane(palette, OverlayContent));
-        tooSmall = new TextPane(palette, (w, h) => PaneContent.TooSmall(State, w, h, glyphs));
+        var frame = symbols == CanvasSymbols.Braille ? FrameGlyphs.Unicode : FrameGlyphs.Ascii;
+        plane = new PlanePane(() => controller.State, controller.Receive, palette, symbols, frame);
+        parameters = new TextPane(palette, frame, (w, h) => PaneContent.Parameters(State, w, h, glyphs)) { Heading = "parameter" };
+        legend = new TextPane(palette, frame, (w, _) => PaneContent.Legend(symbols, w)) { Heading = "legend" };
+        library = new TextPane(palette, frame, (w, h) => PaneContent.Library(State, null, w, h, glyphs)) { Heading = "library" };
+        poles = new TextPane(palette, frame, (w, h) => PaneContent.Poles(State, w, h, glyphs));
+        status = new TextPane(palette, null, (w, _) => PaneContent.Status(State, w, glyphs));
+        overlay = new TextPane(palette, frame, OverlayContent);
+        tooSmall = new TextPane(palette, null, (w, h) => PaneContent.TooSmall(State, w, h, glyphs));
         Add(plane, parameters, legend, library, poles, status, overlay, tooSmall);
         controller.StateChanged += OnStateChanged;
         UpdateTitles(State);
@@ -62,6 +63,18 @@ internal sealed class WorkbenchScreen : Runnable
     /// <summary>The layout in use (for tests and the mouse).</summary>
     public ScreenLayout CurrentLayout => layout;
 
+    // When the screen itself is cleared, every pane must write all its cells again.
+    protected override bool OnClearingViewport()
+    {
+        plane.Invalidate();
+        foreach (var pane in new[] { parameters, legend, library, poles, status, overlay, tooSmall })
+        {
+            pane.Invalidate();
+        }
+
+        return base.OnClearingViewport();
+    }
+
     protected override void OnSubViewLayout(LayoutEventArgs args)
     {
         var next = ScreenLayout.For(Viewport.Width, Viewport.Height);
@@ -72,14 +85,6 @@ internal sealed class WorkbenchScreen : Runnable
         }
 
         base.OnSubViewLayout(args);
-    }
-
-    private static T Framed<T>(T view, string title = "")
-        where T : View
-    {
-        view.BorderStyle = LineStyle.Single;
-        view.Title = title;
-        return view;
     }
 
     private static void PlaceAt(View view, Box box)
@@ -151,27 +156,27 @@ internal sealed class WorkbenchScreen : Runnable
 
         if (!Equals(PlaneInputs(before), PlaneInputs(after)))
         {
-            plane.SetNeedsDraw();
+            RedrawContent(plane);
         }
 
         if (!Equals(ParameterInputs(before), ParameterInputs(after)))
         {
-            parameters.SetNeedsDraw();
+            RedrawContent(parameters);
         }
 
         if (!Equals(PoleInputs(before), PoleInputs(after)))
         {
-            poles.SetNeedsDraw();
+            RedrawContent(poles);
         }
 
         if (before.Library != after.Library || before.Session?.Loaded.Plant.Path != after.Session?.Loaded.Plant.Path)
         {
-            library.SetNeedsDraw();
+            RedrawContent(library);
         }
 
-        overlay.SetNeedsDraw();
-        status.SetNeedsDraw();
-        tooSmall.SetNeedsDraw();
+        RedrawContent(overlay);
+        RedrawContent(status);
+        RedrawContent(tooSmall);
     }
 
     private static object PlaneInputs(WorkbenchState s) =>
@@ -187,9 +192,9 @@ internal sealed class WorkbenchScreen : Runnable
         string mark = glyphs.Selected + " ";
         string zoom = state.View.ZoomSteps == 0 ? string.Empty : $"  zoom {NumberText.Significant(state.View.ZoomFactor, 3)}x";
         string tracing = state.Session is { Locus: null } ? "  tracing" + glyphs.Ellipsis : string.Empty;
-        plane.Title = (state.Focus == Pane.Plane ? mark : string.Empty) + "s-plane" + zoom + tracing;
-        poles.Title = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
-        overlay.Title = state.Overlay switch
+        plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + "s-plane" + zoom + tracing;
+        poles.Heading = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
+        overlay.Heading = state.Overlay switch
         {
             HelpOverlay => "help (Esc closes)",
             LibraryOverlay => "plant library",
@@ -197,6 +202,15 @@ internal sealed class WorkbenchScreen : Runnable
             QuitConfirmOverlay => "quit?",
             _ => string.Empty,
         };
+    }
+
+    // Only the inside of a pane: its frame has not changed, so it is not sent again.
+    private static void RedrawContent(View view)
+    {
+        if (view.Visible)
+        {
+            view.SetNeedsDraw(new System.Drawing.Rectangle(0, 0, view.Viewport.Width, view.Viewport.Height));
+        }
     }
 
     private void RedrawAll()

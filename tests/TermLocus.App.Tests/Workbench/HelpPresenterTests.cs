@@ -21,7 +21,7 @@ public class HelpPresenterTests
         var lines = HelpPresenter.Lines(Glyphs.Unicode, 80);
         Assert.Contains("  ←  h              step the swept value down", lines);
         Assert.Contains("  Esc  ?  q  Enter  close the help", lines);
-        Assert.Contains("  Ctrl+C            quit at once (an unsaved value goes to a recovery file)", lines);
+        Assert.Contains("  Ctrl+C            quit at once, keeping an unsaved value in a recovery file", lines);
     }
 
     [Fact]

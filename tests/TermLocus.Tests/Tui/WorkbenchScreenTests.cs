@@ -149,6 +149,30 @@ public class WorkbenchScreenTests
     }
 
     [Fact]
+    public void Closing_an_overlay_brings_back_exactly_the_screen_under_it()
+    {
+        using var h = ScreenHarness.Start(80, 24).WithSecondOrder();
+        h.Press(Key.CursorRight);
+        string before = h.Screen();
+        foreach (var key in new[] { new Key('?'), new Key('o'), new Key('=') })
+        {
+            h.Press(key);
+            Assert.NotEqual(before, h.Screen());
+            h.Press(Key.Esc);
+            Assert.Equal(before, h.Screen());
+        }
+    }
+
+    [Fact]
+    public void Stepping_then_stepping_back_restores_every_cell()
+    {
+        using var h = ScreenHarness.Start(160, 48).WithSecondOrder(k: 3.6);
+        string before = h.Screen();
+        h.Press(Key.CursorRight, Key.CursorRight, Key.CursorLeft, Key.CursorLeft);
+        Assert.Equal(before, h.Screen());
+    }
+
+    [Fact]
     public void Without_colour_only_the_terminals_own_colours_and_styles_are_sent()
     {
         using var mono = ScreenHarness.Start(80, 24, colour: false).WithSecondOrder(k: 7.5);
