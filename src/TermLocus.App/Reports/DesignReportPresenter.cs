@@ -83,8 +83,17 @@ public static class DesignReportPresenter
         lines.Add($"  feasible {p}: {result.Intervals.Length} interval{(result.Intervals.Length == 1 ? string.Empty : "s")}");
         foreach (var i in result.Intervals)
         {
-            string text = $"    {Num(i.From)} .. {Num(i.To)}   width {NumberText.Short(i.Width, 6)}   {Ends(i)}";
-            lines.Add(SafeText.Fit(text, CheckReportPresenter.Width));
+            string range = $"    {Num(i.From)} .. {Num(i.To)}   width {NumberText.Short(i.Width, 6)}";
+            string ends = Ends(i);
+            if (range.Length + 3 + ends.Length <= CheckReportPresenter.Width)
+            {
+                lines.Add($"{range}   {ends}");
+            }
+            else
+            {
+                lines.Add(range);
+                lines.Add(SafeText.Fit("      " + ends, CheckReportPresenter.Width));
+            }
         }
 
         lines.Add($"  {Num(result.Span.Low)} {DesignBar.Line(result.Span, result.Intervals, result.Recommended?.Value, BarCells)} {Num(result.Span.High)}");
@@ -107,10 +116,21 @@ public static class DesignReportPresenter
             ? $"slowest decay rate {g.DecayRate} {NumberText.Significant(m.Margin)} 1/s"
             : $"{SafeText.Visible(m.Spec)} {NumberText.Significant(m.Margin)}{UnitOf(m.Spec)} ({Percent(m.RelativeMargin)} of the limit)";
         lines.Add(SafeText.Fit($"    smallest margin across the band: {figure} at {where}", CheckReportPresenter.Width));
-        lines.Add(r.Confirmed
-            ? $"    band check at {p} = {NumberText.Short(r.Value, 6)} (corners and interior search): pass {g.Met}"
-            : $"    band check at {p} = {NumberText.Short(r.Value, 6)} (corners and interior search): FAIL {g.Violated} "
-              + "a point inside the band misses a spec");
+        string check = $"    band check at {p} = {NumberText.Short(r.Value, 6)} (corners and interior search): ";
+        lines.Add(SafeText.Fit(r.Confirmed ? check + $"pass {g.Met}" : check + $"FAIL {g.Violated} " + Misses(result.Box, r.Check),
+            CheckReportPresenter.Width));
+    }
+
+    // What the full check found that the corners did not: an interior point of the band, or a limit the design does
+    // not use (overshoot, judged on the simulated response).
+    private static string Misses(ToleranceBox box, LoopCheckResult check)
+    {
+        if (!check.StableAcrossBand)
+        {
+            return "unstable" + (check.WorstDecayRate is { } w ? " at " + BandWording.Point(box, w.At.Toleranced) : string.Empty);
+        }
+
+        return string.Join("; ", check.Violated.Select(v => $"{v.Key} missed at {BandWording.Point(box, v.At)}"));
     }
 
     private static string UnitOf(string key) =>

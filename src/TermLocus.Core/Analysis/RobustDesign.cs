@@ -73,7 +73,7 @@ public static class RobustDesign
         {
             double best = DesignOptimum.Maximize(p => Objective(points, p), widest.From, widest.To, RecommendSamples, scale);
             var check = LoopCheck.Run(model, full.SetItem(sweep, best));
-            recommended = new DesignRecommendation(best, SmallestMargin(check), check);
+            recommended = new DesignRecommendation(best, SmallestMargin(check, points.Limits), check);
         }
 
         return new DesignResult(sweep, span, box, points.Points.Length, intervals, recommended);
@@ -111,9 +111,10 @@ public static class RobustDesign
         return result;
     }
 
-    private static DesignMargin SmallestMargin(LoopCheckResult check)
+    // Over the pole limits the design works with (the check also judges overshoot, on the simulated response).
+    private static DesignMargin SmallestMargin(LoopCheckResult check, IReadOnlyList<(SpecKind Spec, double Limit)> limits)
     {
-        var tightest = check.Band.MinBy(b => b.WorstRelativeMargin);
+        var tightest = check.Band.Where(b => limits.Any(l => l.Spec == b.Spec)).MinBy(b => b.WorstRelativeMargin);
         if (check.StableAcrossBand && tightest is not null)
         {
             return new DesignMargin(tightest.Key, tightest.WorstMargin, tightest.WorstRelativeMargin, tightest.At, tightest.AtCorner);

@@ -184,5 +184,23 @@ public class DesignVerbTests
         Assert.StartsWith(broken + ":5:", Assert.Single(bad.Err.TrimEnd('\n').Split('\n')), StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Overshoot_is_left_to_the_band_check_and_the_smallest_margin_is_a_pole_limit()
+    {
+        // The Ogata loop again with the pole a toleranced and an overshoot limit: the design works on ζ only; the
+        // report says so and every line still fits 100 columns although both ends carry two limits.
+        string file = RepoFiles.TempPlant(OgataLoop.Replace("[loop]", "a = { value = 1.0, tolerance_pct = 20 }\n[loop]", StringComparison.Ordinal)
+            .Replace("(s + 1)", "(s + a)", StringComparison.Ordinal) + "\nmax_overshoot_pct = 25\n");
+        var (code, stdout, _) = CliRunner.Run("design", file, "--json");
+        Assert.Equal(0, code);
+        using var doc = JsonDocument.Parse(stdout);
+        Assert.Equal("min_damping", doc.RootElement.GetProperty("recommended").GetProperty("smallest_margin").GetProperty("spec").GetString());
+
+        var text = CliRunner.Run("design", file);
+        Assert.Contains("max_overshoot_pct is a response figure", text.Out, StringComparison.Ordinal);
+        Assert.All(text.Out.TrimEnd('\n').Split('\n'), line => Assert.True(line.Length <= 100, line));
+        Assert.Contains("below: min_damping and stability", text.Out, StringComparison.Ordinal);
+    }
+
     private static string[] Strings(JsonElement array) => [.. array.EnumerateArray().Select(e => e.GetString()!)];
 }
