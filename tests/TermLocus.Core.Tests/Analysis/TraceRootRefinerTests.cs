@@ -17,7 +17,9 @@ public class TraceRootRefinerTests
             .Select(pairs => pairs.SelectMany(p => p.Item2 < 0.5
                 ? new[] { new Complex(p.Item1, 0), new Complex(p.Item1 - 1, 0) }
                 : new[] { new Complex(p.Item1, p.Item2), new Complex(p.Item1, -p.Item2) }).ToArray())
-            .Where(r => r.Distinct().Count() == r.Length);
+            // Roots at least 0.25 apart: the warm starts (0.05 off) then lie nearest their own root, as they do when
+            // tracing; closer clusters are the eigenvalue solver's job and made this check fail now and then.
+            .Where(r => r.SelectMany((x, i) => r.Skip(i + 1).Select(y => Complex.Abs(x - y))).DefaultIfEmpty(1).Min() >= 0.25);
         roots.Sample(exact =>
         {
             var poly = Polynomial.FromRoots(exact);
