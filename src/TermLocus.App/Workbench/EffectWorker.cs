@@ -52,7 +52,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            return new LocusTraced(CoreBridge.Trace(e.Loaded, e.Key));
+            return new LocusTraced(CoreBridge.Trace(e.Loaded, e.Key, e.Family));
         }
         catch (Exception ex) when (ex is ArithmeticException or ArgumentException or InvalidOperationException or PlantFileException)
         {

@@ -180,9 +180,10 @@ internal sealed class WorkbenchScreen : Runnable
     }
 
     private static object PlaneInputs(WorkbenchState s) =>
-        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.View, s.Focus, s.Session?.SelectedPole, s.Overlay is NoOverlay);
+        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.Session?.Band, s.Session?.CurrentLoop, s.View, s.Focus,
+            s.Session?.SelectedPole, s.Overlay is NoOverlay);
 
-    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep);
+    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep, s.Session?.Varied);
 
     private static object PoleInputs(WorkbenchState s) =>
         (s.Session?.Poles, s.Session?.SelectedPole, s.Focus, s.Overlay is NoOverlay);
@@ -191,8 +192,9 @@ internal sealed class WorkbenchScreen : Runnable
     {
         string mark = glyphs.Selected + " ";
         string zoom = state.View.ZoomSteps == 0 ? string.Empty : $"  zoom {NumberText.Significant(state.View.ZoomFactor, 3)}x";
-        string tracing = state.Session is { Locus: null } ? "  tracing" + glyphs.Ellipsis : string.Empty;
-        plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + "s-plane" + zoom + tracing;
+        string tracing = state.Session is { LocusIsCurrent: false } ? "  tracing" + glyphs.Ellipsis : string.Empty;
+        string name = state.Session?.Loaded.Plane.IsSampled == true ? "z-plane" : "s-plane";
+        plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + name + zoom + tracing;
         poles.Heading = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
         overlay.Heading = state.Overlay switch
         {
