@@ -107,9 +107,13 @@ internal static partial class CoreBridge
         return target;
     }
 
-    private static LoadedPlant Build(PlantDocument document)
+    /// <summary>Builds the loop of a plant not read from a file (nothing to save into). Throws <see cref="PlantFileException"/>.</summary>
+    public static LoadedPlant FromPlant(Plant plant) => Build(plant, null);
+
+    private static LoadedPlant Build(PlantDocument document) => Build(document.Plant, document);
+
+    private static LoadedPlant Build(Plant plant, PlantDocument? document)
     {
-        var plant = document.Plant;
         var model = LoopModel.Create(plant);
         var family = model.Family(plant.Loop.Sweep, plant.NominalValues());
         var range = SweepSpan.For(plant, family, plant.SweptParameter.Value);
