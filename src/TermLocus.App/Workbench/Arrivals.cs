@@ -15,7 +15,7 @@ internal static class Arrivals
         var cache = s.Session?.Cache ?? LocusCache.Empty;
         var opened = new PlantSession(
             loaded, sweep, VariedPosition.First(plant), null, cache, CoreBridge.PolesAt(loaded, sweep.Value), 0);
-        var (session, effects) = Recompute.Session(opened);
+        var (session, effects) = Recompute.Session(opened, s.ShowsResponse);
         var state = s with
         {
             Session = session,
@@ -38,6 +38,38 @@ internal static class Arrivals
         return Update.Done(s with
         {
             Session = session with { Cache = cache, Locus = current ? analysis : session.Locus },
+        });
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) BandChecked(WorkbenchState s, BandCheck check)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.Done(s);
+        }
+
+        bool current = check.SweptValue == session.Sweep.Value;
+        return Update.Done(s with
+        {
+            Session = session with { Checks = session.Checks.With(check.SweptValue, check), Check = current ? check : session.Check },
+        });
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ResponseSimulated(WorkbenchState s, ResponseView response)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.Done(s);
+        }
+
+        bool current = response.Key.Equals(session.ResponseKey);
+        return Update.Done(s with
+        {
+            Session = session with
+            {
+                Responses = session.Responses.With(response.Key, response),
+                Response = current || session.Response is null ? response : session.Response,
+            },
         });
     }
 

@@ -28,7 +28,7 @@ internal static class Banding
         {
             string end = direction < 0 ? "low" : "high";
             return Update.Say(s, StatusMessage.Warning(
-                $"{varied.Parameter} is at the {end} end of its band ({NumberText.Exact(next)})"));
+                $"{varied.Parameter} is at the {end} end of its band ({NumberText.Short(next, 6)})"));
         }
 
         return MoveTo(s, varied with { Value = next }, null);
@@ -48,7 +48,7 @@ internal static class Banding
         }
 
         return MoveTo(s, varied with { Value = varied.Nominal }, StatusMessage.Info(
-            $"{varied.Parameter} back to nominal ({NumberText.Exact(varied.Nominal)})"));
+            $"{varied.Parameter} back to nominal ({NumberText.Short(varied.Nominal, 6)})"));
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) NextParameter(WorkbenchState s)
@@ -74,7 +74,7 @@ internal static class Banding
         // The parameter left goes back to nominal: one parameter is varied at a time.
         var varied = VariedPosition.AtNominal(next);
         return MoveTo(s, varied, StatusMessage.Info(
-            $"varying {next.Name} over {NumberText.Exact(varied.Band.Low)} .. {NumberText.Exact(varied.Band.High)}; " +
+            $"varying {next.Name} over {NumberText.Short(varied.Band.Low, 6)} .. {NumberText.Short(varied.Band.High, 6)}; " +
             $"{session.Varied.Parameter} back to nominal"));
     }
 
@@ -84,10 +84,10 @@ internal static class Banding
         if (!CoreBridge.TryLoopAt(session.Loaded, varied, out var loop, out var problem))
         {
             return Update.Say(s, StatusMessage.Error(
-                $"the loop cannot be formed at {varied.Parameter} = {NumberText.Exact(varied.Value)}: {SafeText.Visible(problem ?? "?")}"));
+                $"the loop cannot be formed at {varied.Parameter} = {NumberText.Short(varied.Value, 6)}: {SafeText.Visible(problem ?? "?")}"));
         }
 
-        var (updated, effects) = Recompute.Session(session with { Varied = varied, CurrentLoop = loop });
+        var (updated, effects) = Recompute.Session(session with { Varied = varied, CurrentLoop = loop }, s.ShowsResponse);
         return (s with { Session = updated, Message = message ?? s.Message }, effects);
     }
 

@@ -66,6 +66,9 @@ public enum Command
     /// <summary>Move the view down.</summary>
     PanDown,
 
+    /// <summary>Show the closed-loop step response (in place of the plane; beside it in roomy layouts), or hide it.</summary>
+    ToggleResponse,
+
     /// <summary>Move keyboard focus to the next pane.</summary>
     NextPane,
 

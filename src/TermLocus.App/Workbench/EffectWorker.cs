@@ -14,6 +14,8 @@ public sealed class EffectWorker(SaveContext saveContext)
         LoadPlantEffect e => Load(e.Path),
         ScanLibraryEffect e => Scan(e.Folder),
         TraceLocusEffect e => Trace(e),
+        CheckBandEffect e => CoreBridge.CheckBand(e.Loaded, e.SweptValue),
+        SimulateResponseEffect e => CoreBridge.Simulate(e.Loaded, e.Values, e.Key),
         SaveOperatingPointEffect e => Save(e),
         SaveRecoveryEffect e => WriteRecovery(e),
         QuitEffect => null,

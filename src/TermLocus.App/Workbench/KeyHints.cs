@@ -80,6 +80,7 @@ public static class KeyHints
         new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 5),
         new([Command.ZoomIn, Command.ZoomOut], "zoom", 7),
         new([Command.FitView], "fit", 8),
+        new([Command.ToggleResponse], "response", 6),
         new([Command.NextPane], "pane", 9),
         new([Command.OpenLibrary], "library", 4),
         new([Command.SaveOperatingPoint], "save", 3),

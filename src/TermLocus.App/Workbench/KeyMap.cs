@@ -96,6 +96,7 @@ public static class KeyMap
         Bind(Command.PanDown, "pan down", K('J'));
         Bind(Command.PanUp, "pan up", K('K'));
         Bind(Command.PanRight, "pan right", K('L'));
+        Bind(Command.ToggleResponse, "show or hide the step response", K('t'));
         Bind(Command.NextPane, "next pane", S(SpecialKey.Tab));
         Bind(Command.OpenLibrary, "open the plant library", K('o'));
         Bind(Command.SaveOperatingPoint, "save the value into the plant file", K('s'));

@@ -58,7 +58,7 @@ public static class ParameterPanelPresenter
 
     /// <summary>"0 ───●······· 20": the range ends and the value's place between them.</summary>
     public static string Bar(SweepState sweep, int width, Glyphs glyphs) =>
-        Bar(sweep.Range.Low, sweep.Range.High, sweep.Position, width, glyphs);
+        Bar(NumberText.Exact(sweep.Range.Low), NumberText.Exact(sweep.Range.High), sweep.Position, width, glyphs);
 
     /// <summary>"J = 0.485 kg*m^2 (+15.5 %)", or "(nominal)": the varied parameter and its offset.</summary>
     public static string VariedLine(VariedPosition varied)
@@ -66,18 +66,17 @@ public static class ParameterPanelPresenter
         string unit = varied.Unit.Length > 0 ? " " + SafeText.Visible(varied.Unit) : string.Empty;
         string offset = varied.IsNominal ? "nominal"
             : varied.PercentFromNominal is double pct ? StatusLinePresenter.Signed(pct) + " %"
-            : "nominal " + NumberText.Exact(varied.Nominal);
-        return $"{varied.Parameter} = {NumberText.Exact(varied.Value)}{unit} ({offset})";
+            : "nominal " + NumberText.Short(varied.Nominal, 6);
+        return $"{varied.Parameter} = {NumberText.Short(varied.Value, 6)}{unit} ({offset})";
     }
 
     /// <summary>"0.3 ──●──── 0.65": the band's ends and the varied value's place between them.</summary>
     public static string BandBar(VariedPosition varied, int width, Glyphs glyphs) =>
-        Bar(varied.Band.Low, varied.Band.High, varied.Position, width, glyphs);
+        Bar(NumberText.Short(varied.Band.Low, 6), NumberText.Short(varied.Band.High, 6), varied.Position, width, glyphs);
 
-    private static string Bar(double lowEnd, double highEnd, double position, int width, Glyphs glyphs)
+    // Band ends from tolerance_pct carry binary dust (0.8 × 0.75 = 0.6000000000000001): six digits say enough.
+    private static string Bar(string low, string high, double position, int width, Glyphs glyphs)
     {
-        string low = NumberText.Exact(lowEnd);
-        string high = NumberText.Exact(highEnd);
         int barWidth = Math.Min(width - low.Length - high.Length - 2, 40);
         if (barWidth < 3)
         {

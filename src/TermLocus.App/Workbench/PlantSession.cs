@@ -21,8 +21,36 @@ public sealed record PlantSession(
     /// <summary>The loop at the varied parameter's place in its band (nominal until stepped).</summary>
     public CurrentLoop? CurrentLoop { get; init; }
 
-    /// <summary>The band at the swept value (check and trails), or null before it is computed.</summary>
+    /// <summary>The trails across the band at the swept value, or null before they are computed.</summary>
     public BandAnalysis? Band { get; init; }
+
+    /// <summary>The band-wide check at the swept value, or null while it runs.</summary>
+    public BandCheck? Check { get; init; }
+
+    /// <summary>Recent band checks by swept value.</summary>
+    public RecentResults<double, BandCheck> Checks { get; init; } = RecentResults<double, BandCheck>.Empty;
+
+    /// <summary>The swept value of the last band check asked for.</summary>
+    public double? RequestedCheck { get; init; }
+
+    /// <summary>The step response shown: the one for the current values once simulated, until then the last one
+    /// (see <see cref="ResponseIsCurrent"/>); null before the first arrives or while the response is not shown.</summary>
+    public ResponseView? Response { get; init; }
+
+    /// <summary>Recent step responses by their inputs.</summary>
+    public RecentResults<ResponseKey, ResponseView> Responses { get; init; } = RecentResults<ResponseKey, ResponseView>.Empty;
+
+    /// <summary>The inputs of the last step response asked for.</summary>
+    public ResponseKey? RequestedResponse { get; init; }
+
+    /// <summary>The inputs of the step response for the values shown.</summary>
+    public ResponseKey ResponseKey => new(Loop.Key, Sweep.Value);
+
+    /// <summary>True when <see cref="Response"/> is for the values shown.</summary>
+    public bool ResponseIsCurrent => Response is { } r && r.Key.Equals(ResponseKey);
+
+    /// <summary>True when the band check is still running for the swept value (a plant with a loop model only).</summary>
+    public bool CheckPending => Check is null && Loaded.Model is not null;
 
     /// <summary>The inputs of the last trace asked for, so a trace in flight (or one that failed) is not asked for again.</summary>
     public TraceKey? RequestedTrace { get; init; }

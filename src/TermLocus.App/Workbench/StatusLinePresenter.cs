@@ -67,7 +67,12 @@ public static class StatusLinePresenter
         }
 
         string at = $"at {sweep.Name} = {NumberText.Short(sweep.Value)}";
-        bool boxed = session.Band?.Check is { Box.Axes.IsEmpty: false };
+        if (session.CheckPending)
+        {
+            return $"{g.Met} {(HasSpecs(session) ? "all specs met" : "stable")} {at}; checking the band{g.Ellipsis}";
+        }
+
+        bool boxed = session.Check?.Result is { Box.Axes.IsEmpty: false };
         return (HasSpecs(session), boxed) switch
         {
             (true, true) => $"{g.Met} all specs met across the band {at}",
@@ -95,12 +100,12 @@ public static class StatusLinePresenter
     // A miss somewhere in the band box that the poles shown do not have: the worst one and where it happens.
     private static string? BandVerdict(PlantSession session, Glyphs g)
     {
-        if (session.Band is not { } band)
+        if (session.Check is not { } band)
         {
             return null;
         }
 
-        if (band.Check is not { } check)
+        if (band.Result is not { } check)
         {
             return band.Problem is { } problem ? $"{g.Violated} band not checked: {SafeText.Visible(problem)}" : null;
         }

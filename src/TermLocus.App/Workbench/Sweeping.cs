@@ -118,7 +118,7 @@ internal static class Sweeping
     {
         var session = s.Session!;
         var sweep = session.Sweep with { Value = value };
-        var (updated, effects) = Recompute.Session(session with { Sweep = sweep });
+        var (updated, effects) = Recompute.Session(session with { Sweep = sweep }, s.ShowsResponse);
         if (message is null && !sweep.Range.Contains(value))
         {
             message = StatusMessage.Warning(

@@ -40,6 +40,7 @@ public static class Update
             Command.PanRight => Viewing.Pan(s, +1, 0),
             Command.PanUp => Viewing.Pan(s, 0, +1),
             Command.PanDown => Viewing.Pan(s, 0, -1),
+            Command.ToggleResponse => Viewing.ToggleResponse(s),
             Command.NextPane => Done(s with { Focus = s.Focus == Pane.Plane ? Pane.Poles : Pane.Plane }),
             Command.MoveUp => Overlays.Move(s, -1),
             Command.MoveDown => Overlays.Move(s, +1),
@@ -70,6 +71,8 @@ public static class Update
             {
                 Message = StatusMessage.Error("not saved: " + Text.SafeText.Visible(m.Problem)),
             }),
+            BandCheck m => Arrivals.BandChecked(state, m),
+            ResponseView m => Arrivals.ResponseSimulated(state, m),
             CharacterTyped m => Overlays.Type(state, m.Character),
             ValuePicked m => Sweeping.Pick(state, m.Value),
             _ => throw new ArgumentOutOfRangeException(nameof(message), message, "unknown message"),

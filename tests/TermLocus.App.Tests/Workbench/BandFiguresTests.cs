@@ -82,7 +82,7 @@ public class BandFiguresTests
         var state = BandPlants.Opened(BandPlants.Quadratic());
         for (int i = 0; i < 5; i++)
         {
-            state = Update.Apply(state, Command.StepBandDown).State;
+            state = BandPlants.Apply(state, Command.StepBandDown);
         }
 
         Assert.Equal(

@@ -45,11 +45,35 @@ internal static class BandPlants
         new Specs(MaxTimeToHalfSeconds: 0.12),
         []));
 
-    /// <summary>A state with <paramref name="loaded"/> open and its trace requested (not delivered).</summary>
+    /// <summary>A state with <paramref name="loaded"/> open, its band check delivered and its trace requested (not delivered).</summary>
     public static WorkbenchState Opened(LoadedPlant loaded)
     {
         var (start, _) = Update.Start(null, TestPlants.Folder);
-        return Update.Receive(start, new PlantLoaded(loaded)).State with { Message = null };
+        var (state, effects) = Update.Receive(start, new PlantLoaded(loaded));
+        return Settle(state, effects.Where(e => e is not TraceLocusEffect)) with { Message = null };
+    }
+
+    /// <summary>Performs <paramref name="effects"/> in line and delivers their messages, as the effect runner would.</summary>
+    public static WorkbenchState Settle(WorkbenchState state, IEnumerable<Effect> effects)
+    {
+        var worker = new EffectWorker(new SaveContext(() => new DateTimeOffset(2026, 1, 2, 3, 4, 5, TimeSpan.Zero), "tester@bench"));
+        foreach (var effect in effects)
+        {
+            if (worker.Perform(effect) is { } message)
+            {
+                var (next, more) = Update.Receive(state, message);
+                state = Settle(next, more.Where(e => e is not TraceLocusEffect));
+            }
+        }
+
+        return state;
+    }
+
+    /// <summary>Applies <paramref name="command"/> and settles the band check and response it asks for.</summary>
+    public static WorkbenchState Apply(WorkbenchState state, Command command)
+    {
+        var (next, effects) = Update.Apply(state, command);
+        return Settle(next, effects.Where(e => e is not TraceLocusEffect));
     }
 
     private static LoadedPlant CoreBridgeFor(Plant plant) => CoreBridge.FromPlant(plant);

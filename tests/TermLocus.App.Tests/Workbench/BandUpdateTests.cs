@@ -29,7 +29,7 @@ public class BandUpdateTests
         var upper = session.Poles.Poles.Single(p => p.Imaginary > 0);
         Assert.Equal(-1.04, upper.Real, Tol);
         Assert.Equal(Math.Sqrt(5 - 1.0816), upper.Imaginary, Tol);
-        var trace = Assert.IsType<TraceLocusEffect>(Assert.Single(effects));
+        var trace = Assert.IsType<TraceLocusEffect>(Assert.Single(effects)); // the band check at K = 5 is still valid
         Assert.Equal(session.Loop.Key, trace.Key);
         Assert.Contains("a=2.08", trace.Key.OtherValues, StringComparison.Ordinal);
         Assert.NotNull(trace.Family);
@@ -62,6 +62,7 @@ public class BandUpdateTests
         Assert.Same(nominalLocus, stepped.Session.Locus);
         var (back, effects) = Update.Apply(stepped, Command.BandToNominal);
         Assert.Empty(effects);
+        Assert.NotNull(back.Session!.Check); // the check does not depend on the band position
         Assert.True(back.Session!.Varied.IsNominal);
         Assert.True(back.Session.LocusIsCurrent);
         Assert.Equal("a back to nominal (2)", back.Message!.Text);
@@ -90,7 +91,8 @@ public class BandUpdateTests
     public void Stepping_the_swept_value_does_not_ask_again_for_a_trace_already_asked_for()
     {
         var (_, effects) = Update.Apply(BandPlants.Opened(BandPlants.Quadratic()), Command.StepSweepUp);
-        Assert.Empty(effects);
+        Assert.DoesNotContain(effects, e => e is TraceLocusEffect);
+        Assert.Equal(5.2, Assert.IsType<CheckBandEffect>(Assert.Single(effects)).SweptValue);
     }
 
     [Fact]
