@@ -12,11 +12,10 @@ internal static class Arrivals
         var parameter = plant.SweptParameter;
         var sweep = new SweepState(
             parameter.Name, parameter.Unit, parameter.Value, parameter.Value, StepSeries.Initial(loaded.Range.Width), loaded.Range);
-        var key = loaded.NominalKey;
         var cache = s.Session?.Cache ?? LocusCache.Empty;
-        var locus = cache.Find(key);
-        var session = new PlantSession(
-            loaded, sweep, VariedPosition.Nominal, locus, cache, CoreBridge.PolesAt(loaded, sweep.Value), 0);
+        var opened = new PlantSession(
+            loaded, sweep, VariedPosition.First(plant), null, cache, CoreBridge.PolesAt(loaded, sweep.Value), 0);
+        var (session, effects) = Recompute.Session(opened, s.ShowsResponse);
         var state = s with
         {
             Session = session,
@@ -24,7 +23,7 @@ internal static class Arrivals
             Overlay = s.Overlay is LibraryOverlay ? Overlay.None : s.Overlay,
             Message = StatusMessage.Info("opened " + SafeText.Visible(Path.GetFileName(plant.Path))),
         };
-        return locus is null ? (state, [new TraceLocusEffect(loaded, key)]) : (state, []);
+        return (state, effects);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) LocusTraced(WorkbenchState s, LocusAnalysis analysis)
@@ -39,6 +38,38 @@ internal static class Arrivals
         return Update.Done(s with
         {
             Session = session with { Cache = cache, Locus = current ? analysis : session.Locus },
+        });
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) BandChecked(WorkbenchState s, BandCheck check)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.Done(s);
+        }
+
+        bool current = check.SweptValue == session.Sweep.Value;
+        return Update.Done(s with
+        {
+            Session = session with { Checks = session.Checks.With(check.SweptValue, check), Check = current ? check : session.Check },
+        });
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ResponseSimulated(WorkbenchState s, ResponseView response)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.Done(s);
+        }
+
+        bool current = response.Key.Equals(session.ResponseKey);
+        return Update.Done(s with
+        {
+            Session = session with
+            {
+                Responses = session.Responses.With(response.Key, response),
+                Response = current || session.Response is null ? response : session.Response,
+            },
         });
     }
 
@@ -84,6 +115,6 @@ internal static class Arrivals
         return saved.QuitAfter ? (state, [new QuitEffect()]) : (state, []);
     }
 
-    /// <summary>The trace inputs of what the session shows now (the nominal values until band stepping lands).</summary>
-    public static TraceKey CurrentKey(PlantSession session) => session.Loaded.NominalKey;
+    /// <summary>The trace inputs of what the session shows now (the varied parameter at its place in the band).</summary>
+    public static TraceKey CurrentKey(PlantSession session) => session.Loop.Key;
 }

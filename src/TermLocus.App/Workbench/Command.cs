@@ -18,6 +18,18 @@ public enum Command
     /// <summary>Make the step one notch (1-2-5 series) larger.</summary>
     CoarserStep,
 
+    /// <summary>Move the varied (toleranced) parameter a tenth of its band down.</summary>
+    StepBandDown,
+
+    /// <summary>Move the varied parameter a tenth of its band up.</summary>
+    StepBandUp,
+
+    /// <summary>Put the varied parameter back to its nominal value.</summary>
+    BandToNominal,
+
+    /// <summary>Vary the next toleranced parameter (the one varied so far goes back to nominal).</summary>
+    NextVariedParameter,
+
     /// <summary>Set the swept value to the start of its range.</summary>
     JumpToRangeStart,
 
@@ -53,6 +65,9 @@ public enum Command
 
     /// <summary>Move the view down.</summary>
     PanDown,
+
+    /// <summary>Show the closed-loop step response (in place of the plane; beside it in roomy layouts), or hide it.</summary>
+    ToggleResponse,
 
     /// <summary>Move keyboard focus to the next pane.</summary>
     NextPane,

@@ -10,34 +10,54 @@ namespace TermLocus.App.Workbench;
 /// The one place where the workbench calls the computation and file components (plant files, loop model, roots,
 /// spec checks, locus tracing and facts, saving). Everything else in the workbench sees only its own records.
 /// </summary>
-internal static class CoreBridge
+internal static partial class CoreBridge
 {
-    /// <summary>The closed-loop poles at <paramref name="value"/> and the specs they miss. Pure and cheap.</summary>
-    public static PoleSnapshot PolesAt(LoadedPlant loaded, double value)
+    /// <summary>The closed-loop poles of the nominal loop at <paramref name="value"/> and the specs they miss.</summary>
+    public static PoleSnapshot PolesAt(LoadedPlant loaded, double value) => PolesAt(loaded, CurrentLoop.Nominal(loaded), value);
+
+    /// <summary>The closed-loop poles of <paramref name="loop"/> at <paramref name="value"/> and the specs they miss. Cheap.</summary>
+    public static PoleSnapshot PolesAt(LoadedPlant loaded, CurrentLoop loop, double value)
     {
+        var plane = loaded.Plane;
         ImmutableArray<Complex> poles;
         try
         {
-            poles = LocusTracer.PolesAt(loaded.Family, value);
+            poles = LocusTracer.PolesAt(loop.Family, value);
         }
         catch (PlantFileException e)
         {
-            return new PoleSnapshot(value, [], [], "the loop cannot be formed here: " + e.Error.Message);
+            return new PoleSnapshot(value, [], [], "the loop cannot be formed here: " + e.Error.Message) { Plane = plane };
         }
         catch (ArgumentException)
         {
-            return new PoleSnapshot(value, [], [], "the characteristic polynomial vanishes here (every s is a root)");
+            return new PoleSnapshot(value, [], [], "the characteristic polynomial vanishes here (every s is a root)") { Plane = plane };
         }
 
-        return new PoleSnapshot(value, poles, Misses(loaded.Plant.Specs, poles));
+        return new PoleSnapshot(value, poles, Misses(loaded.Plant.Specs, poles, plane)) { Plane = plane };
     }
 
-    /// <summary>Every spec the poles miss, worst relative margin first.</summary>
-    public static ImmutableArray<SpecMiss> Misses(Specs specs, ImmutableArray<Complex> poles) =>
-        SpecCheck.Evaluate(specs, poles).Violations
-            .Select(v => new SpecMiss(v.Key, v.Limit, v.Actual, v.Margin, v.Pole))
+    /// <summary>Every spec the s-plane poles miss, worst relative margin first.</summary>
+    public static ImmutableArray<SpecMiss> Misses(Specs specs, ImmutableArray<Complex> poles) => Misses(specs, poles, LoopPlane.Continuous);
+
+    /// <summary>
+    /// Every spec the roots miss, judged through their equivalent s (a deadbeat root z = 0 meets every limit), worst
+    /// relative margin first; each miss names the root as drawn.
+    /// </summary>
+    public static ImmutableArray<SpecMiss> Misses(Specs specs, ImmutableArray<Complex> roots, LoopPlane plane)
+    {
+        var judged = roots.Where(r => plane.MetricsOf(r) is not null).ToList();
+        var equivalent = judged.Select(plane.ToEquivalentS).ToList();
+        Complex RootOf(Complex s)
+        {
+            int i = equivalent.IndexOf(s);
+            return i >= 0 ? judged[i] : plane.FromEquivalentS(s);
+        }
+
+        return SpecCheck.Evaluate(specs, equivalent).Violations
+            .Select(v => new SpecMiss(v.Key, v.Limit, v.Actual, v.Margin, RootOf(v.Pole)))
             .OrderBy(m => m.RelativeMargin)
             .ToImmutableArray();
+    }
 
     /// <summary>Reads a plant file and builds its loop at the nominal values. Throws <see cref="PlantFileException"/>.</summary>
     public static LoadedPlant Load(string path) => Build(PlantFileReader.ReadDocument(path));
@@ -47,10 +67,10 @@ internal static class CoreBridge
         PlantLibrary.Scan(folder).AsParallel().AsOrdered().Select(Item).ToImmutableArray();
 
     /// <summary>The locus over the plant's range and the swept values worth jumping to (the same study the verbs run).</summary>
-    public static LocusAnalysis Trace(LoadedPlant loaded, TraceKey key)
+    public static LocusAnalysis Trace(LoadedPlant loaded, TraceKey key, CharacteristicFamily? family = null)
     {
         var specs = loaded.Plant.Specs;
-        var study = LocusStudy.Run(loaded.Family, loaded.Model?.Plane ?? LoopPlane.Continuous, loaded.Range, specs);
+        var study = LocusStudy.Run(family ?? loaded.Family, loaded.Plane, loaded.Range, specs);
         var marks = study.SpecBoundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, KeyOf(b.Spec, specs)))
             .Concat(study.Facts.AxisCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
             .Concat(study.UnitCircleCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
@@ -87,9 +107,13 @@ internal static class CoreBridge
         return target;
     }
 
-    private static LoadedPlant Build(PlantDocument document)
+    /// <summary>Builds the loop of a plant not read from a file (nothing to save into). Throws <see cref="PlantFileException"/>.</summary>
+    public static LoadedPlant FromPlant(Plant plant) => Build(plant, null);
+
+    private static LoadedPlant Build(PlantDocument document) => Build(document.Plant, document);
+
+    private static LoadedPlant Build(Plant plant, PlantDocument? document)
     {
-        var plant = document.Plant;
         var model = LoopModel.Create(plant);
         var family = model.Family(plant.Loop.Sweep, plant.NominalValues());
         var range = SweepSpan.For(plant, family, plant.SweptParameter.Value);

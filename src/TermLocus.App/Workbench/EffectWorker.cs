@@ -14,6 +14,8 @@ public sealed class EffectWorker(SaveContext saveContext)
         LoadPlantEffect e => Load(e.Path),
         ScanLibraryEffect e => Scan(e.Folder),
         TraceLocusEffect e => Trace(e),
+        CheckBandEffect e => CoreBridge.CheckBand(e.Loaded, e.SweptValue),
+        SimulateResponseEffect e => CoreBridge.Simulate(e.Loaded, e.Values, e.Key),
         SaveOperatingPointEffect e => Save(e),
         SaveRecoveryEffect e => WriteRecovery(e),
         QuitEffect => null,
@@ -52,7 +54,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            return new LocusTraced(CoreBridge.Trace(e.Loaded, e.Key));
+            return new LocusTraced(CoreBridge.Trace(e.Loaded, e.Key, e.Family));
         }
         catch (Exception ex) when (ex is ArithmeticException or ArgumentException or InvalidOperationException or PlantFileException)
         {

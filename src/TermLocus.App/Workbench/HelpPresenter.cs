@@ -32,7 +32,7 @@ public static class HelpPresenter
         width = Math.Max(width, MinimumWidth);
         var lines = ImmutableArray.CreateBuilder<string>();
         lines.Add("Keys (plain keys only; Shift, Ctrl and Alt are never needed with an arrow)");
-        foreach (var scope in ScopeOrder)
+        foreach (var scope in ScopeOrder.Where(s => KeyMap.Bindings.Any(b => b.Scope == s)))
         {
             lines.Add(string.Empty);
             lines.Add(ScopeTitle(scope));

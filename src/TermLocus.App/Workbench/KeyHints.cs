@@ -13,6 +13,12 @@ public static class KeyHints
     public static string Line(WorkbenchState state, int width, Glyphs glyphs)
     {
         var (scope, hints) = HintsFor(state);
+        if (state.Session?.Varied.Parameter is null)
+        {
+            // Nothing to step through: the band hint would only take room.
+            hints = hints.RemoveAll(h => h.Commands.Contains(Command.StepBandUp));
+        }
+
         var texts = hints.Select(h => (h.Priority, Text: Render(h, scope, glyphs))).ToList();
         var kept = new HashSet<int>();
         int used = 0;
@@ -68,11 +74,13 @@ public static class KeyHints
     private static readonly ImmutableArray<Hint> MainHints =
     [
         new([Command.StepSweepDown, Command.StepSweepUp], "step", 2),
+        new([Command.StepBandUp, Command.StepBandDown], "band", 3),
         new([Command.FinerStep, Command.CoarserStep], "step size", 6),
         new([Command.EnterValue], "value", 3),
         new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 5),
         new([Command.ZoomIn, Command.ZoomOut], "zoom", 7),
         new([Command.FitView], "fit", 8),
+        new([Command.ToggleResponse], "response", 6),
         new([Command.NextPane], "pane", 9),
         new([Command.OpenLibrary], "library", 4),
         new([Command.SaveOperatingPoint], "save", 3),

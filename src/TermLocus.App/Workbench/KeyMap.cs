@@ -80,6 +80,10 @@ public static class KeyMap
         Bind(Command.StepSweepUp, "step the swept value up", S(SpecialKey.Right), K('l'));
         Bind(Command.FinerStep, "finer step", K('['), K('-'));
         Bind(Command.CoarserStep, "coarser step", K(']'), K('+'));
+        Bind(Command.StepBandUp, "move the varied parameter up its band (a tenth)", S(SpecialKey.Up), K('k'));
+        Bind(Command.StepBandDown, "move the varied parameter down its band", S(SpecialKey.Down), K('j'));
+        Bind(Command.BandToNominal, "varied parameter back to nominal", K('0'));
+        Bind(Command.NextVariedParameter, "vary the next toleranced parameter", K('v'));
         Bind(Command.JumpToRangeStart, "go to the start of the range", S(SpecialKey.Home), K('g'));
         Bind(Command.JumpToRangeEnd, "go to the end of the range", S(SpecialKey.End), K('G'));
         Bind(Command.EnterValue, "type an exact value", K('='), S(SpecialKey.Enter));
@@ -92,6 +96,7 @@ public static class KeyMap
         Bind(Command.PanDown, "pan down", K('J'));
         Bind(Command.PanUp, "pan up", K('K'));
         Bind(Command.PanRight, "pan right", K('L'));
+        Bind(Command.ToggleResponse, "show or hide the step response", K('t'));
         Bind(Command.NextPane, "next pane", S(SpecialKey.Tab));
         Bind(Command.OpenLibrary, "open the plant library", K('o'));
         Bind(Command.SaveOperatingPoint, "save the value into the plant file", K('s'));
@@ -103,8 +108,6 @@ public static class KeyMap
 
     private static void BindPanesAndOverlays(Action<Scope, Command, string, KeyChord[]> bind)
     {
-        bind(Scope.PlanePane, Command.PanUp, "pan up", [S(SpecialKey.Up)]);
-        bind(Scope.PlanePane, Command.PanDown, "pan down", [S(SpecialKey.Down)]);
         bind(Scope.PolesPane, Command.MoveUp, "select the previous pole", [S(SpecialKey.Up), K('k')]);
         bind(Scope.PolesPane, Command.MoveDown, "select the next pole", [S(SpecialKey.Down), K('j')]);
 

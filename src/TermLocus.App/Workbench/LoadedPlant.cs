@@ -24,4 +24,7 @@ public sealed record LoadedPlant(
 {
     /// <summary>The trace key of the nominal values.</summary>
     public TraceKey NominalKey => TraceKey.For(Plant, Plant.NominalValues());
+
+    /// <summary>The plane of the loop's roots: z for a sampled loop, else s (also for hand-built plants).</summary>
+    public LoopPlane Plane => Model?.Plane ?? LoopPlane.Continuous;
 }

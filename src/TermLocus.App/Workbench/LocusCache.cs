@@ -10,7 +10,7 @@ namespace TermLocus.App.Workbench;
 public sealed record LocusCache(ImmutableArray<LocusAnalysis> Entries)
 {
     /// <summary>Analyses kept.</summary>
-    public const int Capacity = 8;
+    public const int Capacity = 24;
 
     /// <summary>An empty cache.</summary>
     public static LocusCache Empty { get; } = new(ImmutableArray<LocusAnalysis>.Empty);

@@ -35,7 +35,7 @@ internal static class Overlays
                 int items = s.Library.Items.Length;
                 return Update.Done(s with { Overlay = new LibraryOverlay(Math.Clamp(library.Selected + direction, 0, Math.Max(0, items - 1))) });
             case NoOverlay when s.Focus == Pane.Poles && s.Session is { } session:
-                int rows = PoleRows.Group(session.Poles.Poles).Length;
+                int rows = PoleRows.Group(session.Poles.Poles, session.Poles.Plane).Length;
                 int selected = Math.Clamp(session.SelectedPole + direction, 0, Math.Max(0, rows - 1));
                 return Update.Done(s with { Session = session with { SelectedPole = selected } });
             default:

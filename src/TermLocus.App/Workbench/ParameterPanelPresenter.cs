@@ -30,6 +30,12 @@ public static class ParameterPanelPresenter
             lines.Add("step " + NumberText.Exact(sweep.Step));
             lines.Add(sweep.Unsaved ? $"{glyphs.Violated} unsaved (file: {NumberText.Exact(sweep.SavedValue)})" : "saved in the file");
             lines.Add(Bar(sweep, width, glyphs));
+            if (session.Varied.Parameter is not null)
+            {
+                lines.Add(VariedLine(session.Varied));
+                lines.Add(BandBar(session.Varied, width, glyphs));
+            }
+
             lines.Add("file: " + SafeText.Visible(Path.GetFileName(plant.Path)));
             lines.AddRange(SpecLines(plant.Specs, width, glyphs));
             if (plant.Note.Length > 0)
@@ -51,17 +57,33 @@ public static class ParameterPanelPresenter
     }
 
     /// <summary>"0 ───●······· 20": the range ends and the value's place between them.</summary>
-    public static string Bar(SweepState sweep, int width, Glyphs glyphs)
+    public static string Bar(SweepState sweep, int width, Glyphs glyphs) =>
+        Bar(NumberText.Exact(sweep.Range.Low), NumberText.Exact(sweep.Range.High), sweep.Position, width, glyphs);
+
+    /// <summary>"J = 0.485 kg*m^2 (+15.5 %)", or "(nominal)": the varied parameter and its offset.</summary>
+    public static string VariedLine(VariedPosition varied)
     {
-        string low = NumberText.Exact(sweep.Range.Low);
-        string high = NumberText.Exact(sweep.Range.High);
+        string unit = varied.Unit.Length > 0 ? " " + SafeText.Visible(varied.Unit) : string.Empty;
+        string offset = varied.IsNominal ? "nominal"
+            : varied.PercentFromNominal is double pct ? StatusLinePresenter.Signed(pct) + " %"
+            : "nominal " + NumberText.Short(varied.Nominal, 6);
+        return $"{varied.Parameter} = {NumberText.Short(varied.Value, 6)}{unit} ({offset})";
+    }
+
+    /// <summary>"0.3 ──●──── 0.65": the band's ends and the varied value's place between them.</summary>
+    public static string BandBar(VariedPosition varied, int width, Glyphs glyphs) =>
+        Bar(NumberText.Short(varied.Band.Low, 6), NumberText.Short(varied.Band.High, 6), varied.Position, width, glyphs);
+
+    // Band ends from tolerance_pct carry binary dust (0.8 × 0.75 = 0.6000000000000001): six digits say enough.
+    private static string Bar(string low, string high, double position, int width, Glyphs glyphs)
+    {
         int barWidth = Math.Min(width - low.Length - high.Length - 2, 40);
         if (barWidth < 3)
         {
             return $"{low}..{high}";
         }
 
-        int at = (int)Math.Round(sweep.Position * (barWidth - 1));
+        int at = (int)Math.Round(position * (barWidth - 1));
         string bar = string.Concat(Enumerable.Repeat(glyphs.BarFilled, at)) + glyphs.BarMarker
             + string.Concat(Enumerable.Repeat(glyphs.BarEmpty, barWidth - at - 1));
         return $"{low} {bar} {high}";

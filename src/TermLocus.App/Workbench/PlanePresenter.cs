@@ -30,24 +30,30 @@ public static class PlanePresenter
         }
 
         var specs = session.Loaded.Plant.Specs;
-        var branches = session.Locus is { } locus
-            ? locus.Branches.Select((b, i) => new PlaneBranch(i, b.Select(p => p.Pole).ToImmutableArray())).ToImmutableArray()
-            : [];
-        // Fit to what does not move while stepping (the locus), so the view holds still under the arrow keys.
+        var plane = session.Loaded.Plane;
+        var loop = session.Loop;
+        var branches = Branches(session.Locus);
+        // Fit to what does not move while stepping either value (the nominal locus), so the view holds still under
+        // the arrow keys; trails and the poles at the current value are left out of the fit.
+        var fitBranches = session.Cache.Find(session.Loaded.NominalKey) is { } nominal ? Branches(nominal) : branches;
         var still = new PlaneScene
         {
-            Branches = branches,
+            Branches = fitBranches,
             OpenLoopPoles = session.Loaded.OpenLoopPoles,
             OpenLoopZeros = session.Loaded.OpenLoopZeros,
-            CurrentPoles = branches.IsEmpty ? CurrentPoles(session) : [],
-            Boundaries = SPlaneBoundaries.FromSpecs(specs, 1.0),
+            CurrentPoles = fitBranches.IsEmpty ? CurrentPoles(session) : [],
+            Boundaries = plane.IsSampled ? PlaneBoundaries.For(plane, specs, 1.0) : SPlaneBoundaries.FromSpecs(specs, 1.0),
         };
         var view = Adjust(PlaneView.Fit(still.PointsToFit(), columns, rows), state.View, columns, rows);
         double reach = view.Bounds(columns, rows).Reach();
         var scene = still with
         {
+            Branches = branches,
+            BandTrails = session.Band?.Trails.Select(t => t.Select(p => p.Pole).ToImmutableArray()).ToImmutableArray() ?? [],
+            OpenLoopPoles = loop.OpenLoopPoles,
+            OpenLoopZeros = loop.OpenLoopZeros,
             CurrentPoles = CurrentPoles(session),
-            Boundaries = SPlaneBoundaries.FromSpecs(specs, Math.Max(reach, double.Epsilon)),
+            Boundaries = PlaneBoundaries.For(plane, specs, Math.Max(reach, double.Epsilon)),
             Markers = SelectedMarker(state, session),
         };
         return (scene, view);
@@ -92,9 +98,14 @@ public static class PlanePresenter
         return (fitted with { Centre = centre }).Zoom(user.ZoomFactor);
     }
 
+    private static ImmutableArray<PlaneBranch> Branches(LocusAnalysis? locus) =>
+        locus is null
+            ? []
+            : locus.Branches.Select((b, i) => new PlaneBranch(i, b.Select(p => p.Pole).ToImmutableArray())).ToImmutableArray();
+
     private static ImmutableArray<CurrentPole> CurrentPoles(PlantSession session) =>
         session.Poles.Poles
-            .Select(p => new CurrentPole(p, p.Real > 0 || !session.Poles.MissesOf(p).IsEmpty))
+            .Select(p => new CurrentPole(p, !session.Poles.Plane.IsStable(p) || !session.Poles.MissesOf(p).IsEmpty))
             .ToImmutableArray();
 
     private static ImmutableArray<Complex> SelectedMarker(WorkbenchState state, PlantSession session)
@@ -104,7 +115,7 @@ public static class PlanePresenter
             return [];
         }
 
-        var rows = PoleRows.Group(session.Poles.Poles);
+        var rows = PoleRows.Group(session.Poles.Poles, session.Poles.Plane);
         return session.SelectedPole < rows.Length ? [rows[session.SelectedPole].Pole] : [];
     }
 }

@@ -4,33 +4,46 @@ using TermLocus.Core.Analysis;
 
 namespace TermLocus.App.Workbench;
 
-/// <summary>Groups closed-loop poles into table rows: one per real pole or conjugate pair, rightmost first.</summary>
+/// <summary>Groups closed-loop poles into table rows: one per real pole or conjugate pair, least stable first.</summary>
 public static class PoleRows
 {
     /// <summary>An imaginary part below this fraction of the pole's magnitude counts as zero (root-finder dust).</summary>
     public const double RealTolerance = 1e-7;
 
-    /// <summary>The rows for <paramref name="poles"/>, sorted by real part, largest (least stable) first.</summary>
-    public static ImmutableArray<PoleRow> Group(ImmutableArray<Complex> poles)
+    /// <summary>The rows for s-plane <paramref name="poles"/>, sorted by real part, largest (least stable) first.</summary>
+    public static ImmutableArray<PoleRow> Group(ImmutableArray<Complex> poles) => Group(poles, LoopPlane.Continuous);
+
+    /// <summary>The rows for <paramref name="poles"/>, roots in <paramref name="plane"/>, least stable (largest
+    /// equivalent real part) first.</summary>
+    public static ImmutableArray<PoleRow> Group(ImmutableArray<Complex> poles, LoopPlane plane)
     {
-        var rows = new List<PoleRow>();
+        var rows = new List<(PoleRow Row, double Real)>();
         foreach (var pole in poles)
         {
             double scale = Math.Max(1.0, Complex.Abs(pole));
+            Complex shown;
             if (Math.Abs(pole.Imaginary) <= RealTolerance * scale)
             {
-                var real = new Complex(pole.Real, 0);
-                rows.Add(new PoleRow(real, false, PoleMetrics.Of(real)));
+                shown = new Complex(pole.Real, 0);
             }
             else if (pole.Imaginary > 0)
             {
-                rows.Add(new PoleRow(pole, true, PoleMetrics.Of(pole)));
+                shown = pole;
             }
+            else
+            {
+                continue;
+            }
+
+            var s = plane.ToEquivalentS(shown);
+            var row = new PoleRow(shown, shown.Imaginary != 0, plane.MetricsOf(shown), plane.IsStable(shown));
+            rows.Add((row, double.IsFinite(s.Real) ? s.Real : double.NegativeInfinity));
         }
 
         return rows
-            .OrderByDescending(r => r.Pole.Real)
-            .ThenByDescending(r => r.Pole.Imaginary)
+            .OrderByDescending(r => r.Real)
+            .ThenByDescending(r => r.Row.Pole.Imaginary)
+            .Select(r => r.Row)
             .ToImmutableArray();
     }
 }

@@ -4,19 +4,29 @@ using TermLocus.App.Text;
 
 namespace TermLocus.App.Workbench;
 
-#pragma warning disable CS8524 // every named value is handled; see Update.
-
 /// <summary>
-/// The pole table: one row per real pole or conjugate pair, rightmost (least stable) first, with ζ, ωn, σ, time to
-/// half (or to double) and ωd. A row that misses a spec starts with the violation glyph and names the problem in
-/// words, so it never depends on colour. Columns are dropped from the right when the width is short.
+/// The pole table: one row per real pole or conjugate pair, least stable first, with ζ, ωn, σ, time to half (or to
+/// double) and ωd; with a varied parameter also each pole's worst ζ and σ across its band and, given room, how far ζ
+/// and σ move for +1 % of it (else a detail line for the selected pole says so). A row that misses a spec starts with
+/// the violation glyph and names the problem in words, so it never depends on colour. Columns are dropped from the
+/// right when the width is short. In a sampled loop the pole column is the root in z and the figures come from its
+/// equivalent s = ln(z)/T.
 /// </summary>
 public static class PoleTablePresenter
 {
     private const int MarkWidth = 3;
     private const int MinimumLocationWidth = 12;
-    private const int NumberWidth = 9;
+    private const int NumberWidth = PoleFigureText.Width + 1;
     private const int MinimumSpecWidth = 10;
+
+    private static readonly ImmutableArray<PoleColumn> PlainColumns =
+        [PoleColumn.Damping, PoleColumn.NaturalFrequency, PoleColumn.DecayRate, PoleColumn.Time, PoleColumn.DampedFrequency];
+
+    private static readonly ImmutableArray<PoleColumn> BandColumns =
+    [
+        PoleColumn.Damping, PoleColumn.WorstDamping, PoleColumn.NaturalFrequency, PoleColumn.DecayRate, PoleColumn.WorstDecayRate,
+        PoleColumn.Time, PoleColumn.DampedFrequency, PoleColumn.DampingPerPercent, PoleColumn.DecayRatePerPercent,
+    ];
 
     /// <summary>
     /// At most <paramref name="height"/> lines of exactly <paramref name="width"/> columns: a header, then rows,
@@ -29,18 +39,22 @@ public static class PoleTablePresenter
     /// <param name="glyphs">Symbols to use.</param>
     public static ImmutableArray<string> Lines(PoleSnapshot poles, int? selected, int width, int height, Glyphs glyphs)
     {
-        var rows = PoleRows.Group(poles.Poles);
+        var rows = PoleRows.Group(poles.Poles, poles.Plane);
         int locationWidth = Math.Max(MinimumLocationWidth, rows.IsEmpty ? 0 : rows.Max(r => TextWidth.Of(SpecWording.Location(r.Pole, glyphs))) + 1);
-        var columns = ColumnsFor(width, locationWidth);
+        var columns = ColumnsFor(width, locationWidth, poles.BandFigures.IsEmpty ? PlainColumns : BandColumns);
         var lines = ImmutableArray.CreateBuilder<string>();
-        lines.Add(Header(columns, locationWidth, glyphs));
+        lines.Add(Header(columns, locationWidth, poles.Plane.IsSampled, glyphs));
         if (rows.IsEmpty)
         {
             lines.Add("  no closed-loop poles (the characteristic polynomial is constant)");
             return Finish(lines, width, height, glyphs);
         }
 
-        int room = Math.Max(1, height - 1);
+        // The detail line says what the missing sensitivity columns would; it goes last, so it needs a line of its own.
+        string? detail = columns.Contains(PoleColumn.DampingPerPercent) || poles.BandFigures.IsEmpty
+            ? null
+            : SensitivityLine(rows[Math.Clamp(selected ?? 0, 0, rows.Length - 1)], poles, glyphs);
+        int room = Math.Max(1, height - 1 - (detail is null || height < 4 ? 0 : 1));
         bool fits = rows.Length <= room;
         int visible = fits ? rows.Length : Math.Max(1, room - 1);
         int first = fits ? 0 : Math.Clamp((selected ?? 0) - visible + 1, 0, rows.Length - visible);
@@ -54,16 +68,46 @@ public static class PoleTablePresenter
             lines.Add($"  {rows.Length - visible} more (Tab, then {glyphs.Up}/{glyphs.Down})");
         }
 
+        if (detail is not null && height >= 4)
+        {
+            while (lines.Count < height - 1)
+            {
+                lines.Add(string.Empty);
+            }
+
+            lines.Add(detail);
+        }
+
         return Finish(lines, width, height, glyphs);
     }
 
-    /// <summary>The figure columns that fit in <paramref name="width"/>, in order, leaving room for the spec words.</summary>
-    internal static ImmutableArray<PoleColumn> ColumnsFor(int width, int locationWidth)
+    /// <summary>
+    /// "+1 % J moves -1.000 ± j1.000: ζ +0.00213, σ -0.0120 1/s", or why it cannot be said, for one row.
+    /// </summary>
+    internal static string SensitivityLine(PoleRow row, PoleSnapshot poles, Glyphs g)
     {
-        PoleColumn[] all = [PoleColumn.Damping, PoleColumn.NaturalFrequency, PoleColumn.DecayRate, PoleColumn.Time, PoleColumn.DampedFrequency];
+        string name = SafeText.Visible(poles.VariedParameter ?? "?");
+        string at = SpecWording.Location(row.Pole, g);
+        var band = poles.BandFiguresOf(row.Pole);
+        if (band is { NearMultipleRoot: true })
+        {
+            return $"  +1 % {name} at {at}: undefined near a multiple root";
+        }
+
+        if (band?.DampingPerPercent is not double dz || band.DecayRatePerPercent is not double ds)
+        {
+            return $"  +1 % {name} at {at}: no figure (the pole has no finite equivalent, or {name} is 0)";
+        }
+
+        return $"  +1 % {name} moves {at}: {g.Zeta} {PoleFigureText.Signed(dz)}, {g.DecayRate} {PoleFigureText.Signed(ds)} 1/s";
+    }
+
+    /// <summary>The figure columns of <paramref name="order"/> that fit in <paramref name="width"/>, leaving room for the spec words.</summary>
+    internal static ImmutableArray<PoleColumn> ColumnsFor(int width, int locationWidth, ImmutableArray<PoleColumn> order)
+    {
         int used = MarkWidth + locationWidth + MinimumSpecWidth;
         var chosen = ImmutableArray.CreateBuilder<PoleColumn>();
-        foreach (var column in all)
+        foreach (var column in order)
         {
             if (used + NumberWidth > width && chosen.Count > 0)
             {
@@ -77,42 +121,29 @@ public static class PoleTablePresenter
         return chosen.ToImmutable();
     }
 
-    private static string Header(ImmutableArray<PoleColumn> columns, int locationWidth, Glyphs g)
+    private static string Header(ImmutableArray<PoleColumn> columns, int locationWidth, bool sampled, Glyphs g)
     {
         var sb = new StringBuilder(new string(' ', MarkWidth));
-        sb.Append(TextWidth.PadRight("pole", locationWidth));
+        sb.Append(TextWidth.PadRight(sampled ? "pole in z" : "pole", locationWidth));
         foreach (var column in columns)
         {
-            string title = column switch
-            {
-                PoleColumn.Damping => g.Zeta,
-                PoleColumn.NaturalFrequency => g.NaturalFrequency + " rad/s",
-                PoleColumn.DecayRate => g.DecayRate + " 1/s",
-                PoleColumn.Time => g.TimeToHalf + " s",
-                PoleColumn.DampedFrequency => g.DampedFrequency + " rad/s",
-            };
-            sb.Append(TextWidth.PadLeft(Shorten(title), NumberWidth - 1)).Append(' ');
+            sb.Append(TextWidth.PadLeft(PoleFigureText.Title(column, g), NumberWidth - 1)).Append(' ');
         }
 
         return sb.Append(" spec").ToString();
     }
 
-    // A title too long for its column loses its unit rather than being cut mid-word.
-    private static string Shorten(string title) =>
-        TextWidth.Of(title) <= NumberWidth - 1 || !title.Contains(' ', StringComparison.Ordinal)
-            ? title
-            : title[..title.IndexOf(' ', StringComparison.Ordinal)];
-
     private static string Row(PoleRow row, PoleSnapshot poles, ImmutableArray<PoleColumn> columns, int locationWidth, bool isSelected, Glyphs g)
     {
         var problems = Problems(row, poles, g);
+        var band = poles.BandFiguresOf(row.Pole);
         var sb = new StringBuilder();
         sb.Append(isSelected ? g.Selected : " ");
         sb.Append(problems.Count > 0 ? g.Violated : " ").Append(' ');
         sb.Append(TextWidth.PadRight(SpecWording.Location(row.Pole, g), locationWidth));
         foreach (var column in columns)
         {
-            sb.Append(TextWidth.PadLeft(Fitting(digits => Figure(row, column, digits, g)), NumberWidth - 1)).Append(' ');
+            sb.Append(TextWidth.PadLeft(PoleFigureText.Figure(row, band, column, g), NumberWidth - 1)).Append(' ');
         }
 
         sb.Append(' ').Append(problems.Count > 0 ? string.Join(", ", problems) : g.Met);
@@ -122,7 +153,7 @@ public static class PoleTablePresenter
     private static List<string> Problems(PoleRow row, PoleSnapshot poles, Glyphs g)
     {
         var words = new List<string>();
-        if (row.Pole.Real > 0)
+        if (!row.IsStable)
         {
             words.Add("unstable");
         }
@@ -137,35 +168,6 @@ public static class PoleTablePresenter
         }
 
         return words;
-    }
-
-    // Fewer significant digits rather than a cut-off number.
-    private static string Fitting(Func<int, string> figure)
-    {
-        for (int digits = 4; digits > 2; digits--)
-        {
-            string text = figure(digits);
-            if (TextWidth.Of(text) <= NumberWidth - 1)
-            {
-                return text;
-            }
-        }
-
-        return figure(2);
-    }
-
-    private static string Figure(PoleRow row, PoleColumn column, int digits, Glyphs g)
-    {
-        var m = row.Metrics;
-        return column switch
-        {
-            PoleColumn.Damping => m.Damping is double z ? z.ToString("F4", System.Globalization.CultureInfo.InvariantCulture) : "-",
-            PoleColumn.NaturalFrequency => NumberText.Significant(m.NaturalFrequency, digits),
-            PoleColumn.DecayRate => NumberText.Significant(m.DecayRate, digits),
-            PoleColumn.Time => m.TimeToHalfSeconds is double half ? NumberText.Significant(half, digits)
-                : m.TimeToDoubleSeconds is double twice ? g.TimeToDouble + " " + NumberText.Significant(twice, digits) : "-",
-            PoleColumn.DampedFrequency => row.IsPair ? NumberText.Significant(m.DampedFrequency, digits) : "0",
-        };
     }
 
     private static ImmutableArray<string> Finish(ImmutableArray<string>.Builder lines, int width, int height, Glyphs glyphs) =>

@@ -28,11 +28,43 @@ public sealed record ScreenLayout(
     /// <summary>From this height (and <see cref="RoomyWidth"/>) the side column gets the legend and library.</summary>
     public const int RoomyHeight = 36;
 
+    /// <summary>The step-response pane (with its frame), or empty when the response is not shown.</summary>
+    public Box Response { get; init; } = Box.Empty;
+
+    /// <summary>Share of the plane's rows the plane keeps when the roomy layout shows the response below it.</summary>
+    public const double RoomyPlaneShare = 0.55;
+
     /// <summary>Rows of the status area.</summary>
     public const int StatusRows = 3;
 
     private const int LegendRows = 7;
     private const int MinimumLibraryRows = 5;
+
+    /// <summary>
+    /// The layout for a <paramref name="width"/> × <paramref name="height"/> screen; with <paramref name="response"/>
+    /// the step response takes the plane's place (compact) or the lower part of it (roomy).
+    /// </summary>
+    public static ScreenLayout For(int width, int height, bool response)
+    {
+        var layout = For(width, height);
+        if (!response || layout.Mode == LayoutMode.TooSmall)
+        {
+            return layout;
+        }
+
+        var plane = layout.Plane;
+        if (layout.Mode == LayoutMode.Compact)
+        {
+            return layout with { Plane = Box.Empty, Response = plane };
+        }
+
+        int planeRows = (int)Math.Round(plane.Height * RoomyPlaneShare);
+        return layout with
+        {
+            Plane = plane with { Height = planeRows },
+            Response = new Box(plane.X, plane.Y + planeRows, plane.Width, plane.Height - planeRows),
+        };
+    }
 
     /// <summary>The layout for a <paramref name="width"/> × <paramref name="height"/> screen.</summary>
     public static ScreenLayout For(int width, int height)

@@ -29,7 +29,10 @@ public static class StatusLinePresenter
         return lines.Select(l => SafeText.Fit(l, width, glyphs.Ellipsis)).Select(l => TextWidth.PadRight(l, width)).ToImmutableArray();
     }
 
-    /// <summary>The verdict line for the open plant.</summary>
+    /// <summary>
+    /// The verdict line for the open plant: a miss of the poles shown (at the swept value and the varied parameter's
+    /// place), else a miss anywhere in the band box with the point where it happens, else all met.
+    /// </summary>
     public static string Verdict(PlantSession? session, Glyphs g)
     {
         if (session is null)
@@ -44,21 +47,86 @@ public static class StatusLinePresenter
             return $"{g.Violated} at {sweep.Name} = {NumberText.Short(sweep.Value)} {SafeText.Visible(problem)}";
         }
 
+        string here = session.Varied.IsNominal ? string.Empty : $" (with {VariedWords(session.Varied)})";
         if (!poles.AllMet)
         {
             int more = poles.Misses.Length - 1;
             string tail = more > 0 ? $"  (+{more} more)" : string.Empty;
-            return $"{g.Violated} {SpecWording.Violation(poles.Misses[0], g)}{tail}";
+            return $"{g.Violated} {SpecWording.Violation(poles.Misses[0], g)}{here}{tail}";
         }
 
-        var unstable = poles.Poles.Where(p => p.Real > 0).OrderByDescending(p => p.Real).ToList();
-        if (unstable.Count > 0)
+        if (!poles.Unstable.IsEmpty)
         {
-            return $"{g.Violated} unstable: a pole at {SpecWording.Location(unstable[0], g)} is in the right half-plane";
+            string where = poles.Plane.IsSampled ? "is outside the unit circle" : "is in the right half-plane";
+            return $"{g.Violated} unstable: a pole at {SpecWording.Location(poles.Unstable[0], g)} {where}{here}";
+        }
+
+        if (BandVerdict(session, g) is { } band)
+        {
+            return band;
         }
 
         string at = $"at {sweep.Name} = {NumberText.Short(sweep.Value)}";
-        return HasSpecs(session) ? $"{g.Met} all specs met {at}" : $"{g.Met} stable {at}; the file sets no specs";
+        if (session.CheckPending)
+        {
+            return $"{g.Met} {(HasSpecs(session) ? "all specs met" : "stable")} {at}; checking the band{g.Ellipsis}";
+        }
+
+        bool boxed = session.Check?.Result is { Box.Axes.IsEmpty: false };
+        return (HasSpecs(session), boxed) switch
+        {
+            (true, true) => $"{g.Met} all specs met across the band {at}",
+            (true, false) => $"{g.Met} all specs met {at}",
+            (false, true) => $"{g.Met} stable across the band {at}; the file sets no specs",
+            (false, false) => $"{g.Met} stable {at}; the file sets no specs",
+        };
+    }
+
+    /// <summary>"J 0.48 (+14.3 %)": the varied parameter's value and its offset from nominal.</summary>
+    public static string VariedWords(VariedPosition varied)
+    {
+        string offset = varied.PercentFromNominal is double pct ? $" ({Signed(pct)} %)" : string.Empty;
+        return $"{varied.Parameter} {NumberText.Short(varied.Value, 6)}{offset}";
+    }
+
+    /// <summary>A percentage with its sign and at most one decimal: "+14.3", "-25", "0".</summary>
+    public static string Signed(double pct)
+    {
+        double rounded = Math.Round(pct, 1);
+        string text = rounded.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture);
+        return rounded > 0 ? "+" + text : rounded == 0 ? "0" : text;
+    }
+
+    // A miss somewhere in the band box that the poles shown do not have: the worst one and where it happens.
+    private static string? BandVerdict(PlantSession session, Glyphs g)
+    {
+        if (session.Check is not { } band)
+        {
+            return null;
+        }
+
+        if (band.Result is not { } check)
+        {
+            return band.Problem is { } problem ? $"{g.Violated} band not checked: {SafeText.Visible(problem)}" : null;
+        }
+
+        var plane = session.Loaded.Plane;
+        if (!check.StableAcrossBand)
+        {
+            string where = check.WorstDecayRate is { } w ? " at " + Reports.BandWording.Point(check.Box, w.At.Toleranced) : string.Empty;
+            return $"{g.Violated} in band: the closed loop is unstable{where}";
+        }
+
+        var violated = check.Violated;
+        if (violated.IsEmpty)
+        {
+            return null;
+        }
+
+        var worst = violated[0];
+        var miss = new SpecMiss(worst.Key, worst.Limit, worst.WorstActual, worst.WorstMargin, plane.FromEquivalentS(worst.WorstPole));
+        string more = violated.Length > 1 ? $"  (+{violated.Length - 1} more)" : string.Empty;
+        return $"{g.Violated} in band: {SpecWording.Violation(miss, g)} with {Reports.BandWording.Point(check.Box, worst.At)}{more}";
     }
 
     private static bool HasSpecs(PlantSession session) => session.Loaded.Plant.Specs != Core.Plants.Specs.None;

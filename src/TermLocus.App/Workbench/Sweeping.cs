@@ -69,7 +69,7 @@ internal static class Sweeping
             return Update.NoPlant(s);
         }
 
-        if (session.Locus is not { } locus)
+        if (session.Locus is not { } locus || !session.LocusIsCurrent)
         {
             return Update.Say(s, StatusMessage.Warning("the locus is still being traced"));
         }
@@ -113,19 +113,12 @@ internal static class Sweeping
         return SetValue(s, rounded, StatusMessage.Info($"picked {session.Sweep.Name} = {NumberText.Exact(rounded)} on the plane"));
     }
 
-    /// <summary>Sets the swept value and recomputes the poles there (not the trace).</summary>
+    /// <summary>Sets the swept value and recomputes the poles and the band there (not the trace).</summary>
     public static (WorkbenchState, ImmutableArray<Effect>) SetValue(WorkbenchState s, double value, StatusMessage? message)
     {
         var session = s.Session!;
         var sweep = session.Sweep with { Value = value };
-        var poles = CoreBridge.PolesAt(session.Loaded, value);
-        int rows = PoleRows.Group(poles.Poles).Length;
-        var updated = session with
-        {
-            Sweep = sweep,
-            Poles = poles,
-            SelectedPole = Math.Clamp(session.SelectedPole, 0, Math.Max(0, rows - 1)),
-        };
+        var (updated, effects) = Recompute.Session(session with { Sweep = sweep }, s.ShowsResponse);
         if (message is null && !sweep.Range.Contains(value))
         {
             message = StatusMessage.Warning(
@@ -133,6 +126,6 @@ internal static class Sweeping
                 $"[{NumberText.Exact(sweep.Range.Low)}, {NumberText.Exact(sweep.Range.High)}]");
         }
 
-        return Update.Done(s with { Session = updated, Message = message ?? s.Message });
+        return (s with { Session = updated, Message = message ?? s.Message }, effects);
     }
 }

@@ -25,4 +25,16 @@ internal static class Viewing
             View = s.View with { PanRight = s.View.PanRight + (right * step), PanUp = s.View.PanUp + (up * step) },
         });
     }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ToggleResponse(WorkbenchState s)
+    {
+        var shown = s with { ShowsResponse = !s.ShowsResponse };
+        if (!shown.ShowsResponse || shown.Session is not { } session)
+        {
+            return Update.Done(shown);
+        }
+
+        var (updated, effects) = Recompute.Session(session, withResponse: true);
+        return (shown with { Session = updated }, effects);
+    }
 }

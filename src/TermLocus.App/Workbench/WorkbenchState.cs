@@ -17,6 +17,9 @@ public sealed record WorkbenchState(
     Overlay Overlay,
     StatusMessage? Message)
 {
+    /// <summary>True when the step response is on screen (instead of the plane, or beside it in roomy layouts).</summary>
+    public bool ShowsResponse { get; init; }
+
     /// <summary>True when a chosen value has not been saved to its plant file.</summary>
     public bool Unsaved => Session?.Unsaved ?? false;
 

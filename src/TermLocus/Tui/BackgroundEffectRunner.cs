@@ -4,30 +4,74 @@ using Terminal.Gui.App;
 namespace TermLocus.Tui;
 
 /// <summary>
-/// Runs slow effects (reading, tracing, saving) on the thread pool and posts the result back with
-/// <see cref="IApplication.Invoke(Action)"/>. The recovery file is written in line: the program is about to exit.
+/// Runs slow effects (reading, tracing, checking, simulating, saving) on the thread pool and posts the result back
+/// with <see cref="IApplication.Invoke(Action)"/>. Band checks and step responses follow every keystroke, so of those
+/// only the newest waiting one runs (one of each kind at a time): holding an arrow key never queues up stale work.
+/// The recovery file is written in line: the program is about to exit.
 /// </summary>
 internal sealed class BackgroundEffectRunner(IApplication app, EffectWorker worker) : EffectRunner
 {
+    private readonly object gate = new();
+    private readonly Dictionary<Type, Effect> waiting = [];
+    private readonly HashSet<Type> running = [];
+
     public override void Run(Effect effect, Action<Message> deliver)
     {
-        if (effect is SaveRecoveryEffect)
+        switch (effect)
         {
-            if (worker.Perform(effect) is { } failed)
-            {
-                deliver(failed);
-            }
+            case SaveRecoveryEffect:
+                if (worker.Perform(effect) is { } failed)
+                {
+                    deliver(failed);
+                }
 
-            return;
+                return;
+            case CheckBandEffect or SimulateResponseEffect:
+                RunNewest(effect, deliver);
+                return;
+            default:
+                _ = Task.Run(() => Perform(effect, deliver));
+                return;
+        }
+    }
+
+    private void RunNewest(Effect effect, Action<Message> deliver)
+    {
+        var kind = effect.GetType();
+        lock (gate)
+        {
+            waiting[kind] = effect;
+            if (!running.Add(kind))
+            {
+                return;
+            }
         }
 
         _ = Task.Run(() =>
         {
-            var message = worker.Perform(effect);
-            if (message is not null)
+            while (true)
             {
-                app.Invoke(() => deliver(message));
+                Effect next;
+                lock (gate)
+                {
+                    if (!waiting.Remove(kind, out next!))
+                    {
+                        running.Remove(kind);
+                        return;
+                    }
+                }
+
+                Perform(next, deliver);
             }
         });
+    }
+
+    private void Perform(Effect effect, Action<Message> deliver)
+    {
+        var message = worker.Perform(effect);
+        if (message is not null)
+        {
+            app.Invoke(() => deliver(message));
+        }
     }
 }

@@ -32,6 +32,11 @@ internal static class PaneContent
         return lines.Select((line, i) => new StyledLine(line, i == 0 ? Tone.Heading : RowTone(line, g))).ToList();
     }
 
+    public static IReadOnlyList<StyledLine> Response(WorkbenchState state, int width, int height, CanvasSymbols symbols, Glyphs g) =>
+        ResponsePanePresenter.Lines(state.Session, width, height, symbols, g)
+            .Select(l => new StyledLine(l, l.Contains(g.Violated + " ", StringComparison.Ordinal) ? Tone.Bad : Tone.Normal))
+            .ToList();
+
     public static IReadOnlyList<StyledLine> Status(WorkbenchState state, int width, Glyphs g)
     {
         var lines = StatusLinePresenter.Lines(state, width, 3, g);

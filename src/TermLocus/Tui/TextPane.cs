@@ -60,16 +60,23 @@ internal sealed class TextPane : View
         bool full = last is null || lastSize != (width, height);
         for (int row = 0; row < rows.Count; row++)
         {
-            if (!full && last![row].AsSpan().SequenceEqual(rows[row]))
+            var before = full || row >= last!.Count ? null : last[row];
+            if (before is not null && before.AsSpan().SequenceEqual(rows[row]))
             {
                 continue;
             }
 
             int column = 0;
-            foreach (var segment in rows[row])
+            for (int i = 0; i < rows[row].Length; i++)
             {
-                SetAttribute(palette.For(segment.Tone));
-                AddStr(column, row, segment.Text);
+                var segment = rows[row][i];
+                var (from, to) = ChangedSpan(segment, before is not null && before.Length == rows[row].Length ? before[i] : null);
+                if (from <= to)
+                {
+                    SetAttribute(palette.For(segment.Tone));
+                    AddStr(column + from, row, segment.Text.Substring(from, to - from + 1));
+                }
+
                 column += TextWidth.Of(segment.Text);
             }
         }
@@ -77,6 +84,31 @@ internal sealed class TextPane : View
         last = rows;
         lastSize = (width, height);
         return true;
+    }
+
+    // The stretch of a segment that differs from what is on screen, as character indices; only for text of
+    // single-width characters in the same tone and length (else the whole segment). Empty (from > to) when unchanged.
+    private static (int From, int To) ChangedSpan(StyledLine now, StyledLine? was)
+    {
+        string text = now.Text;
+        if (was is not { } before || before.Tone != now.Tone || before.Text.Length != text.Length || TextWidth.Of(text) != text.Length)
+        {
+            return (0, text.Length - 1);
+        }
+
+        int from = 0;
+        while (from < text.Length && text[from] == before.Text[from])
+        {
+            from++;
+        }
+
+        int to = text.Length - 1;
+        while (to >= from && text[to] == before.Text[to])
+        {
+            to--;
+        }
+
+        return (from, to);
     }
 
     private List<StyledLine[]> Rows(int width, int height)

@@ -26,6 +26,7 @@ internal sealed class WorkbenchScreen : Runnable
     private readonly TextPane status;
     private readonly TextPane overlay;
     private readonly TextPane tooSmall;
+    private readonly TextPane response;
     private ScreenLayout layout = ScreenLayout.For(0, 0);
 
     public WorkbenchScreen(WorkbenchController controller, Palette palette, CanvasSymbols symbols)
@@ -50,7 +51,8 @@ internal sealed class WorkbenchScreen : Runnable
         status = new TextPane(palette, null, (w, _) => PaneContent.Status(State, w, glyphs));
         overlay = new TextPane(palette, frame, OverlayContent);
         tooSmall = new TextPane(palette, null, (w, h) => PaneContent.TooSmall(State, w, h, glyphs));
-        Add(plane, parameters, legend, library, poles, status, overlay, tooSmall);
+        response = new TextPane(palette, frame, (w, h) => PaneContent.Response(State, w, h, symbols, glyphs));
+        Add(plane, response, parameters, legend, library, poles, status, overlay, tooSmall);
         controller.StateChanged += OnStateChanged;
         UpdateTitles(State);
     }
@@ -67,7 +69,7 @@ internal sealed class WorkbenchScreen : Runnable
     protected override bool OnClearingViewport()
     {
         plane.Invalidate();
-        foreach (var pane in new[] { parameters, legend, library, poles, status, overlay, tooSmall })
+        foreach (var pane in new[] { parameters, legend, library, poles, status, overlay, tooSmall, response })
         {
             pane.Invalidate();
         }
@@ -77,7 +79,7 @@ internal sealed class WorkbenchScreen : Runnable
 
     protected override void OnSubViewLayout(LayoutEventArgs args)
     {
-        var next = ScreenLayout.For(Viewport.Width, Viewport.Height);
+        var next = ScreenLayout.For(Viewport.Width, Viewport.Height, State.ShowsResponse);
         if (next != layout)
         {
             layout = next;
@@ -103,6 +105,7 @@ internal sealed class WorkbenchScreen : Runnable
     {
         bool small = layout.Mode == LayoutMode.TooSmall;
         PlaceAt(plane, layout.Plane);
+        PlaceAt(response, layout.Response);
         PlaceAt(parameters, layout.Parameters);
         PlaceAt(legend, layout.Legend);
         PlaceAt(library, layout.Library);
@@ -111,6 +114,14 @@ internal sealed class WorkbenchScreen : Runnable
         PlaceAt(tooSmall, small ? layout.Screen : Box.Empty);
         plane.ShowsLegend = layout.Mode == LayoutMode.Compact;
         PlaceOverlay(State);
+
+        // Panes moved or changed size: none may trust what it remembers of the screen.
+        plane.Invalidate();
+        foreach (var pane in new[] { parameters, legend, library, poles, status, overlay, tooSmall, response })
+        {
+            pane.Invalidate();
+        }
+
         RedrawAll();
     }
 
@@ -146,6 +157,12 @@ internal sealed class WorkbenchScreen : Runnable
     private void OnStateChanged(WorkbenchState before, WorkbenchState after)
     {
         UpdateTitles(after);
+        if (before.ShowsResponse != after.ShowsResponse)
+        {
+            SetNeedsLayout();
+            return;
+        }
+
         if (before.Overlay.GetType() != after.Overlay.GetType()
             || (after.Overlay is LibraryOverlay && before.Library != after.Library))
         {
@@ -157,6 +174,11 @@ internal sealed class WorkbenchScreen : Runnable
         if (!Equals(PlaneInputs(before), PlaneInputs(after)))
         {
             RedrawContent(plane);
+        }
+
+        if (!Equals(ResponseInputs(before), ResponseInputs(after)))
+        {
+            RedrawContent(response);
         }
 
         if (!Equals(ParameterInputs(before), ParameterInputs(after)))
@@ -180,9 +202,13 @@ internal sealed class WorkbenchScreen : Runnable
     }
 
     private static object PlaneInputs(WorkbenchState s) =>
-        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.View, s.Focus, s.Session?.SelectedPole, s.Overlay is NoOverlay);
+        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.Session?.Band, s.Session?.CurrentLoop, s.View, s.Focus,
+            s.Session?.SelectedPole, s.Overlay is NoOverlay);
 
-    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep);
+    private static object ResponseInputs(WorkbenchState s) =>
+        (s.ShowsResponse, s.Session?.Response, s.Session?.Loaded.Plant.Specs);
+
+    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep, s.Session?.Varied);
 
     private static object PoleInputs(WorkbenchState s) =>
         (s.Session?.Poles, s.Session?.SelectedPole, s.Focus, s.Overlay is NoOverlay);
@@ -191,9 +217,13 @@ internal sealed class WorkbenchScreen : Runnable
     {
         string mark = glyphs.Selected + " ";
         string zoom = state.View.ZoomSteps == 0 ? string.Empty : $"  zoom {NumberText.Significant(state.View.ZoomFactor, 3)}x";
-        string tracing = state.Session is { Locus: null } ? "  tracing" + glyphs.Ellipsis : string.Empty;
-        plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + "s-plane" + zoom + tracing;
+        string tracing = state.Session is { LocusIsCurrent: false } ? "  tracing" + glyphs.Ellipsis : string.Empty;
+        string name = state.Session?.Loaded.Plane.IsSampled == true ? "z-plane" : "s-plane";
+        plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + name + zoom + tracing;
         poles.Heading = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
+        string simulating = state.Session is { ResponseIsCurrent: false } ? "  simulating" + glyphs.Ellipsis : string.Empty;
+        response.Heading = "step response" + (state.Session is { } session
+            ? $" at {session.Sweep.Name} = {NumberText.Short(session.Sweep.Value)}" : string.Empty) + simulating;
         overlay.Heading = state.Overlay switch
         {
             HelpOverlay => "help (Esc closes)",
@@ -216,7 +246,7 @@ internal sealed class WorkbenchScreen : Runnable
     private void RedrawAll()
     {
         SetNeedsDraw();
-        foreach (var view in new View[] { plane, parameters, legend, library, poles, status, overlay, tooSmall })
+        foreach (var view in new View[] { plane, response, parameters, legend, library, poles, status, overlay, tooSmall })
         {
             view.SetNeedsDraw();
         }

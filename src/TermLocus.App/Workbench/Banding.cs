@@ -1,0 +1,96 @@
+using System.Collections.Immutable;
+using TermLocus.App.Text;
+
+namespace TermLocus.App.Workbench;
+
+/// <summary>
+/// Commands that move the varied (toleranced) parameter through its band: a tenth of the band a step, back to
+/// nominal, or on to the next toleranced parameter. The swept value stays; the poles, the band figures and the locus
+/// follow.
+/// </summary>
+internal static class Banding
+{
+    public static (WorkbenchState, ImmutableArray<Effect>) Step(WorkbenchState s, int direction)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var varied = session.Varied;
+        if (varied.Parameter is null)
+        {
+            return Update.Say(s, StatusMessage.Info(NoBand(session)));
+        }
+
+        double next = varied.Next(direction);
+        if (next == varied.Value)
+        {
+            string end = direction < 0 ? "low" : "high";
+            return Update.Say(s, StatusMessage.Warning(
+                $"{varied.Parameter} is at the {end} end of its band ({NumberText.Short(next, 6)})"));
+        }
+
+        return MoveTo(s, varied with { Value = next }, null);
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ToNominal(WorkbenchState s)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var varied = session.Varied;
+        if (varied.Parameter is null)
+        {
+            return Update.Say(s, StatusMessage.Info(NoBand(session)));
+        }
+
+        return MoveTo(s, varied with { Value = varied.Nominal }, StatusMessage.Info(
+            $"{varied.Parameter} back to nominal ({NumberText.Short(varied.Nominal, 6)})"));
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) NextParameter(WorkbenchState s)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var candidates = VariedPosition.Candidates(session.Loaded.Plant);
+        if (candidates.Count == 0)
+        {
+            return Update.Say(s, StatusMessage.Info(NoBand(session)));
+        }
+
+        int at = candidates.ToList().FindIndex(p => p.Name == session.Varied.Parameter);
+        var next = candidates[(at + 1) % candidates.Count];
+        if (candidates.Count == 1)
+        {
+            return Update.Say(s, StatusMessage.Info($"{next.Name} is the only toleranced parameter"));
+        }
+
+        // The parameter left goes back to nominal: one parameter is varied at a time.
+        var varied = VariedPosition.AtNominal(next);
+        return MoveTo(s, varied, StatusMessage.Info(
+            $"varying {next.Name} over {NumberText.Short(varied.Band.Low, 6)} .. {NumberText.Short(varied.Band.High, 6)}; " +
+            $"{session.Varied.Parameter} back to nominal"));
+    }
+
+    private static (WorkbenchState, ImmutableArray<Effect>) MoveTo(WorkbenchState s, VariedPosition varied, StatusMessage? message)
+    {
+        var session = s.Session!;
+        if (!CoreBridge.TryLoopAt(session.Loaded, varied, out var loop, out var problem))
+        {
+            return Update.Say(s, StatusMessage.Error(
+                $"the loop cannot be formed at {varied.Parameter} = {NumberText.Short(varied.Value, 6)}: {SafeText.Visible(problem ?? "?")}"));
+        }
+
+        var (updated, effects) = Recompute.Session(session with { Varied = varied, CurrentLoop = loop }, s.ShowsResponse);
+        return (s with { Session = updated, Message = message ?? s.Message }, effects);
+    }
+
+    private static string NoBand(PlantSession session) =>
+        $"no toleranced parameter besides {session.Sweep.Name}: give one a band or tolerance_pct to step through it";
+}
