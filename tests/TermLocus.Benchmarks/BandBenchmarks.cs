@@ -1,7 +1,6 @@
 using System.Collections.Immutable;
 using System.Numerics;
 using BenchmarkDotNet.Attributes;
-using TermLocus.Core.Algebra;
 using TermLocus.Core.Analysis;
 using TermLocus.Core.Plants;
 
@@ -13,6 +12,7 @@ namespace TermLocus.Benchmarks;
 /// <c>termlocus check</c> and the library list run (corners, then the search inside the band for each spec).
 /// </summary>
 [MemoryDiagnoser]
+[MedianColumn]
 public class BandBenchmarks
 {
     private const double Step = 0.04;
@@ -63,8 +63,7 @@ public class BandBenchmarks
     }
 
     // The same poles the band check uses for a continuous loop: finite roots of the characteristic polynomial.
-    private Complex[] FinitePoles(IReadOnlyDictionary<string, double> at) =>
-        [.. PolynomialRoots.FindWithInfinite(model.Characteristic(at)).Finite];
+    private Complex[] FinitePoles(IReadOnlyDictionary<string, double> at) => [.. model.CharacteristicRoots(at).Finite];
 
     private double NextValue()
     {

@@ -13,6 +13,7 @@ namespace TermLocus.Benchmarks;
 /// as in the workbench, where a step does not trace again.
 /// </summary>
 [MemoryDiagnoser]
+[MedianColumn]
 public class WorkbenchStepBenchmarks
 {
     private const int Width = 160;

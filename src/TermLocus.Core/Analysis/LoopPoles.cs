@@ -16,14 +16,14 @@ internal sealed class LoopPoles(LoopModel model)
     /// <summary>Finite poles and the count of infinite ones. Throws <see cref="PlantFileException"/> when the loop cannot be formed.</summary>
     public (ImmutableArray<Complex> Finite, int Infinite) At(IReadOnlyDictionary<string, double> values)
     {
-        var characteristic = model.Characteristic(values);
+        var (characteristic, known) = model.CharacteristicAndRoots(values);
         if (characteristic.IsZero)
         {
             throw new PlantFileException(new PlantFileError(model.Plant.Path, new SourcePosition(1, 1),
                 "the characteristic polynomial is identically zero at these values"));
         }
 
-        var roots = PolynomialRoots.FindWithInfinite(characteristic);
+        var roots = known ?? PolynomialRoots.FindWithInfinite(characteristic);
         if (!model.Plane.IsSampled)
         {
             return (roots.Finite, roots.InfiniteCount);

@@ -109,6 +109,23 @@ public sealed class LoopModel
     /// <see cref="PolynomialRoots.Find(Polynomial)"/> finds.</exception>
     public Polynomial Characteristic(IReadOnlyDictionary<string, double> values) => parts.Characteristic(slots.Resolve(values));
 
+    /// <summary>
+    /// The roots of <see cref="Characteristic"/> at the given values, exactly as
+    /// <see cref="PolynomialRoots.FindWithInfinite(Polynomial)"/> gives them (finite roots sorted by real then
+    /// imaginary part, and the count lost to infinity), with one eigenvalue solve instead of two.
+    /// </summary>
+    /// <exception cref="PlantFileException">As <see cref="Characteristic"/>.</exception>
+    /// <exception cref="ArgumentException">The characteristic polynomial is identically zero.</exception>
+    public RootSet CharacteristicRoots(IReadOnlyDictionary<string, double> values)
+    {
+        var (characteristic, roots) = CharacteristicAndRoots(values);
+        return roots ?? PolynomialRoots.FindWithInfinite(characteristic);
+    }
+
+    /// <summary>The characteristic polynomial, and its roots when the check on it already found them (else null).</summary>
+    internal (Polynomial Characteristic, RootSet? Roots) CharacteristicAndRoots(IReadOnlyDictionary<string, double> values) =>
+        parts.CharacteristicAndRoots(slots.Resolve(values));
+
     /// <summary>Like <see cref="Characteristic"/>, returning the located error instead of throwing.</summary>
     public bool TryCharacteristic(
         IReadOnlyDictionary<string, double> values,

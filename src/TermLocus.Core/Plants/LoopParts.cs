@@ -57,7 +57,13 @@ internal sealed class LoopParts
         return new LoopParts(path, null, loop.Feedback, path.Blame);
     }
 
-    public Polynomial Characteristic(double[] slots) =>
+    public Polynomial Characteristic(double[] slots) => CharacteristicAndRoots(slots).Characteristic;
+
+    /// <summary>
+    /// The characteristic polynomial and, when checking that its roots are computable found them all finite, those
+    /// roots (as <see cref="PolynomialRoots.FindWithInfinite(Polynomial)"/> gives them); else null.
+    /// </summary>
+    public (Polynomial Characteristic, RootSet? Roots) CharacteristicAndRoots(double[] slots) =>
         WithComputablePoles(given is not null ? GivenCharacteristic(slots) : FromLoopGain(LoopGain(slots)));
 
     /// <summary>The product of the path's factors in order, nothing cancelled.</summary>
@@ -151,11 +157,23 @@ internal sealed class LoopParts
     // The closed-loop poles must be computable: a leading coefficient negligible next to the others (a sub-normal J,
     // say) puts poles beyond what a double holds, and coefficients spread over hundreds of decades defeat the root
     // finder. Solving once here turns both into a located error instead of a failure far from the file.
-    private Polynomial WithComputablePoles(Polynomial p)
+    // With no root at infinity the solve that finds them is the same as the plain one, so its roots are handed on
+    // and the caller does not solve again (half the cost of a band's corners).
+    private (Polynomial, RootSet?) WithComputablePoles(Polynomial p)
     {
-        if (p.Degree < 1 || PolynomialRoots.TryFind(p, out _))
+        if (p.Degree < 1)
         {
-            return p;
+            return (p, null);
+        }
+
+        if (PolynomialRoots.TryFindWithInfinite(p, RootFindingOptions.Default, out var roots) && roots.InfiniteCount == 0)
+        {
+            return (p, roots);
+        }
+
+        if (PolynomialRoots.TryFind(p, out _))
+        {
+            return (p, null);
         }
 
         var magnitudes = p.Coefficients.Where(c => c != 0.0).Select(Math.Abs).ToArray();
