@@ -10,6 +10,10 @@ root=$(cd "$(dirname "$0")/../.." && pwd)
 for tool in dotnet tmux python3; do
   command -v "$tool" >/dev/null 2>&1 || { echo "aot-smoke: $tool is not installed" >&2; exit 2; }
 done
+if [ -z "${TERMLOCUS_AOT_BIN:-}" ] && ! command -v clang >/dev/null 2>&1 && ! command -v gcc >/dev/null 2>&1; then
+  echo "aot-smoke: the NativeAOT publish needs a C toolchain (clang or gcc) to link" >&2
+  exit 2
+fi
 
 work=$(mktemp -d)
 sock="$work/tmux.sock"
