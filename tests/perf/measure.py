@@ -4,7 +4,8 @@
 In a pseudo-terminal of COLSxROWS (python's pty module) it runs the binary under /usr/bin/time -v and records:
   - time to first frame: from starting the process to the first complete frame (the last screen row written),
     and to "settled" (the last byte before the screen goes quiet, i.e. the plant loaded and its locus drawn);
-  - bytes written to the terminal for each arrow-key step (right arrows, then as many left arrows);
+  - bytes written to the terminal for each arrow-key step (right arrows, then as many left arrows), and for a
+    full repaint (F5) to compare with;
   - bytes written and CPU used while idle for IDLE seconds (CPU from /proc/<pid>/stat);
   - peak resident memory (from /usr/bin/time -v) over the whole run.
 The pseudo-terminal answers the queries a terminal answers (cursor position, device attributes, colours), like
@@ -175,6 +176,9 @@ def start_run(opts, time_file, interactive):
             p.send(key)
             out = p.pump(seconds=5, until_quiet=QUIET_S)
             steps.append({"bytes": len(out), "ms": round((p.log[-1][0] + p.start - sent) * 1000, 1) if out else None})
+        p.send(b"\x1b[15~")  # F5: Terminal.Gui repaints the whole screen, the figure a step is compared with
+        repaint = p.pump(seconds=5, until_quiet=QUIET_S)
+        result["full_repaint_bytes"] = len(repaint)
         cpu0 = cpu_seconds(pid)
         t0 = time.monotonic()
         idle = p.pump(seconds=opts.idle)
@@ -362,6 +366,7 @@ def main():
         "step_bytes_max": max(steps),
         "step_bytes_all": steps,
         "step_ms_median": median(s["ms"] for s in live["steps"]),
+        "full_repaint_bytes": live["full_repaint_bytes"],
         "idle_seconds": live["idle_seconds"],
         "idle_bytes_per_s": live["idle_bytes_per_s"],
         "idle_cpu_pct": live["idle_cpu_pct"],
