@@ -66,7 +66,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext);
+            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext, e.Name, e.Note);
             return new OperatingPointSaved(saved.Plant, saved, e.Value, e.QuitAfter);
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException)

@@ -62,6 +62,12 @@ public static class KeyHints
             new([Command.Cancel], "cancel", 0),
             new([Command.DeleteBackward], "delete", 1),
         ]),
+        SaveOverlay => (Scope.SaveDialog,
+        [
+            new([Command.Confirm], "save", 0),
+            new([Command.NextPane], "next field", 1),
+            new([Command.Cancel], "cancel", 0),
+        ]),
         QuitConfirmOverlay => (Scope.QuitConfirm,
         [
             new([Command.SaveAndQuit], "save and quit", 0),

@@ -21,6 +21,7 @@ public static class KeyMap
         HelpOverlay => [Scope.Help, Scope.Everywhere],
         LibraryOverlay => [Scope.Library, Scope.Everywhere],
         ValueEntryOverlay => [Scope.ValueEntry, Scope.Everywhere],
+        SaveOverlay => [Scope.SaveDialog, Scope.Everywhere],
         QuitConfirmOverlay => [Scope.QuitConfirm, Scope.Everywhere],
         _ => [PaneScope(state.Focus), Scope.Main, Scope.Everywhere],
     };
@@ -123,6 +124,12 @@ public static class KeyMap
         bind(Scope.ValueEntry, Command.Confirm, "set the value", [S(SpecialKey.Enter)]);
         bind(Scope.ValueEntry, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
         bind(Scope.ValueEntry, Command.Cancel, "cancel", [S(SpecialKey.Escape)]);
+
+        bind(Scope.SaveDialog, Command.Confirm, "save with this name and note", [S(SpecialKey.Enter)]);
+        bind(Scope.SaveDialog, Command.NextPane, "next field", [S(SpecialKey.Tab), S(SpecialKey.Down)]);
+        bind(Scope.SaveDialog, Command.MoveUp, "previous field", [S(SpecialKey.Up)]);
+        bind(Scope.SaveDialog, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
+        bind(Scope.SaveDialog, Command.Cancel, "cancel, nothing is written", [S(SpecialKey.Escape)]);
 
         bind(Scope.QuitConfirm, Command.SaveAndQuit, "save, then quit", [K('s'), K('y')]);
         bind(Scope.QuitConfirm, Command.DiscardAndQuit, "quit without saving", [K('d'), K('n')]);
