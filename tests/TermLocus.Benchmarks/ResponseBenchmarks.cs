@@ -13,7 +13,7 @@ public class ResponseBenchmarks
     [GlobalSetup]
     public void Setup()
     {
-        // Five invented second-order sections (ζ, ωn) and a real zero, unit DC gain.
+        // Five invented second-order sections (ζ, ωn) and a real zero, unit steady-state gain.
         (double Zeta, double Wn)[] sections = [(0.3, 2.0), (0.5, 7.0), (0.7, 15.0), (0.2, 40.0), (0.9, 90.0)];
         var den = Polynomial.One;
         foreach (var (zeta, wn) in sections)

@@ -14,6 +14,9 @@ internal static class CompanionEigenvalues
     private const int StackMatrixLimit = 40 * 40;
     private const int MaxBalancingSweeps = 64;
 
+    /// <summary>Largest balancing factor applied in one step (2^256): far past any useful balance, far from overflow.</summary>
+    private const double MaxBalancingFactor = 1.157920892373162e77;
+
     /// <summary>
     /// Writes the m eigenvalues into <paramref name="re"/>/<paramref name="im"/> (complex pairs exactly conjugate,
     /// real ones with im exactly 0). Tries the Francis QR first and MathNet's general solver when that does not
@@ -72,7 +75,7 @@ internal static class CompanionEigenvalues
             {
                 double r = i == 0 ? OffDiagonalSum(top) : Math.Abs(sub[i - 1]);
                 double c = (i == 0 ? 0.0 : Math.Abs(top[i])) + (i < m - 1 ? Math.Abs(sub[i]) : 0.0);
-                if (c == 0.0 || r == 0.0)
+                if (c == 0.0 || r == 0.0 || !double.IsFinite(c) || !double.IsFinite(r))
                 {
                     continue;
                 }
@@ -105,14 +108,17 @@ internal static class CompanionEigenvalues
         double s = c + r;
         double f = 1.0;
         double g = r / 2.0;
-        while (c < g)
+
+        // Bounded: with c and r hundreds of decades apart an unbounded f overflowed to infinity, the next sweep saw an
+        // infinite c, and c /= 4 never ended (a hang found by fuzzing, e.g. -1e267·s^3 + 1.3e-77·s^2 - 5e-155·s + 7e-233).
+        while (c < g && f < MaxBalancingFactor)
         {
             f *= 2.0;
             c *= 4.0;
         }
 
         g = r * 2.0;
-        while (c > g)
+        while (c > g && f > 1.0 / MaxBalancingFactor)
         {
             f /= 2.0;
             c /= 4.0;

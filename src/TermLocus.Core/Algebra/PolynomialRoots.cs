@@ -23,9 +23,14 @@ namespace TermLocus.Core.Algebra;
 /// and 1e12 in one polynomial) get repair rounds, see <see cref="RootFindingOptions.RepairBackwardError"/>.
 /// Speed: roughly cubic in the degree (the QR iteration); no allocation besides the result array, none at all in the
 /// span form of <see cref="TryFind(ReadOnlySpan{double}, Span{Complex}, RootFindingOptions, out int)"/>.
+/// Range: roots past the double range, and roots spread so widely (hundreds of decades, e.g. -s^5 + 5e184·s^2 +
+/// 6e-277) that the scaled companion matrix overflows, are not found: Find throws, TryFind returns false.
 /// </remarks>
 public static class PolynomialRoots
 {
+    private const string NotSolvedMessage =
+        "The roots could not be computed: the companion-matrix eigenvalue iteration did not converge, or a root lies beyond the range of double.";
+
     /// <summary>
     /// All <c>p.Degree</c> roots of <paramref name="p"/>, sorted by real part then imaginary part; complex roots in
     /// exactly conjugate pairs, real roots with imaginary part exactly 0, roots at the origin exactly 0.
@@ -33,18 +38,19 @@ public static class PolynomialRoots
     /// <see cref="FindWithInfinite(Polynomial)"/> to report those as roots at infinity.
     /// </summary>
     /// <exception cref="ArgumentException">The zero polynomial, or a coefficient that is not finite.</exception>
-    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge (not seen in practice).</exception>
+    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge (not seen in practice), or a root
+    /// lies beyond the range of double (a leading coefficient negligible next to the others, e.g. 1e-310·s + 1).</exception>
     public static Complex[] Find(Polynomial p) => Find(p, RootFindingOptions.Default);
 
     /// <summary>As <see cref="Find(Polynomial)"/>, with explicit tolerances and limits.</summary>
     /// <exception cref="ArgumentException">The zero polynomial, or a coefficient that is not finite.</exception>
-    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge.</exception>
+    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge, or a root lies beyond the range of double.</exception>
     public static Complex[] Find(Polynomial p, RootFindingOptions options)
     {
         ThrowIfUnsolvable(p);
         return TryFind(p, options, out var roots)
             ? roots
-            : throw new ArithmeticException("The companion-matrix eigenvalue iteration did not converge.");
+            : throw new ArithmeticException(NotSolvedMessage);
     }
 
     /// <summary>As <see cref="Find(Polynomial)"/>, but returns false (roots empty) instead of throwing.</summary>
@@ -68,7 +74,7 @@ public static class PolynomialRoots
     /// Allocation-free form for hot loops: the roots of the polynomial with ascending coefficients
     /// <paramref name="ascending"/> (trailing zeros ignored) go into the front of <paramref name="destination"/>,
     /// which needs room for the degree; <paramref name="rootCount"/> is the degree. Returns false for the zero
-    /// polynomial, a non-finite coefficient, too small a destination, or no convergence.
+    /// polynomial, a non-finite coefficient, too small a destination, no convergence, or a root beyond the range of double.
     /// </summary>
     public static bool TryFind(
         ReadOnlySpan<double> ascending, Span<Complex> destination, RootFindingOptions options, out int rootCount)
@@ -97,18 +103,18 @@ public static class PolynomialRoots
     /// roots are found on the polynomial without the vanished terms and then polished on the whole of it.
     /// </summary>
     /// <exception cref="ArgumentException">The zero polynomial, or a coefficient that is not finite.</exception>
-    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge.</exception>
+    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge, or a root lies beyond the range of double.</exception>
     public static RootSet FindWithInfinite(Polynomial p) => FindWithInfinite(p, RootFindingOptions.Default);
 
     /// <summary>As <see cref="FindWithInfinite(Polynomial)"/>, with explicit tolerances and limits.</summary>
     /// <exception cref="ArgumentException">The zero polynomial, or a coefficient that is not finite.</exception>
-    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge.</exception>
+    /// <exception cref="ArithmeticException">The eigenvalue iteration did not converge, or a root lies beyond the range of double.</exception>
     public static RootSet FindWithInfinite(Polynomial p, RootFindingOptions options)
     {
         ThrowIfUnsolvable(p);
         return TryFindWithInfinite(p, options, out var roots)
             ? roots
-            : throw new ArithmeticException("The companion-matrix eigenvalue iteration did not converge.");
+            : throw new ArithmeticException(NotSolvedMessage);
     }
 
     /// <summary>As <see cref="FindWithInfinite(Polynomial, RootFindingOptions)"/>, but returns false (null) instead of throwing.</summary>
@@ -185,6 +191,15 @@ public static class PolynomialRoots
             && !NonZeroRoots.TrySolve(q[..(nonZeroRoots + 1)], q, destination.Slice(zeros, nonZeroRoots), options))
         {
             return false;
+        }
+
+        // Roots past the double range come back as infinities or NaN; no caller can use them, so fail instead.
+        foreach (var root in destination[..finiteCount])
+        {
+            if (!double.IsFinite(root.Real) || !double.IsFinite(root.Imaginary))
+            {
+                return false;
+            }
         }
 
         SortByRealThenImaginary(destination[..finiteCount]);

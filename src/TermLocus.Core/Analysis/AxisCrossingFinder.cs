@@ -17,6 +17,9 @@ internal static class AxisCrossingFinder
     /// <summary>After polishing, |P(jω; p)| must be below this share of |A(jω)| + |p·B(jω)|.</summary>
     private const double ResidualTolerance = 1e-8;
 
+    /// <summary>A + p·B counts as identically zero when every coefficient cancels to this share of its terms.</summary>
+    private const double VanishingTolerance = 1e-12;
+
     private const int NewtonIterations = 30;
 
     /// <summary>A solution (ω, p), with whether it is an open-loop pole on the axis (A(jω) = 0, p = 0).</summary>
@@ -29,7 +32,27 @@ internal static class AxisCrossingFinder
     internal static ImmutableArray<AxisCrossing> Find(AffineSplit split, double from, double to) =>
         [.. Solutions(split)
             .Where(x => LocusRange.Contains(from, to, x.Value) && (!x.OpenLoopPole || (from < 0.0 && to > 0.0)))
+            .Where(x => !VanishesAt(split, x.Value))
             .Select(x => new AxisCrossing(x.Omega, x.Value, x.Direction))];
+
+    /// <summary>
+    /// True when A + p·B is identically zero (A and B proportional, every coefficient cancelled to within
+    /// <see cref="VanishingTolerance"/>): every s solves P there, so no pole crosses the axis at that value.
+    /// </summary>
+    private static bool VanishesAt(AffineSplit split, double p)
+    {
+        int n = Math.Max(split.A.Degree, split.B.Degree);
+        for (int k = 0; k <= n; k++)
+        {
+            double a = split.A[k], b = p * split.B[k];
+            if (Math.Abs(a + b) > VanishingTolerance * (Math.Abs(a) + Math.Abs(b)))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
 
     /// <summary>Every real solution with ω &gt;= 0 and finite p, ordered by p then ω, duplicates merged.</summary>
     internal static List<Solution> Solutions(AffineSplit split)

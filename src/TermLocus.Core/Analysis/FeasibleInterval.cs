@@ -10,4 +10,10 @@ public sealed record FeasibleInterval(double From, double To, ImmutableArray<str
 {
     /// <summary>To - From.</summary>
     public double Width => To - From;
+
+    /// <summary>The keys violated just below <see cref="From"/>; empty when it is the span's start (or not known).</summary>
+    public ImmutableArray<string> FromLimitedBy { get; init; } = [];
+
+    /// <summary>The keys violated just above <see cref="To"/>; empty when it is the span's end (or not known).</summary>
+    public ImmutableArray<string> ToLimitedBy { get; init; } = [];
 }

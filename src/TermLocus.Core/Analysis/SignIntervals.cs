@@ -2,13 +2,20 @@ namespace TermLocus.Core.Analysis;
 
 /// <summary>
 /// The sub-intervals of [from, to] where a function is &gt;= 0, with each interior end solved by bisection to a relative
-/// tolerance. Sign changes are bracketed on a uniform grid, so two crossings closer than one grid step may be missed;
+/// tolerance of the end itself (so an end near 0 in a wide span is still solved to that share of its own value; the
+/// floor for an end at 0 is <see cref="ZeroFloorShare"/> of the span's scale). Sign changes are bracketed on a uniform grid, so two crossings closer than one grid step may be missed;
 /// callers pass extra candidate points (known boundaries) to be safe.
 /// </summary>
 public static class SignIntervals
 {
-    /// <summary>Default relative accuracy of a solved end: 1e-12 of max(|value|, span).</summary>
+    /// <summary>Default relative accuracy of a solved end: 1e-12 of max(|end|, <see cref="ZeroFloorShare"/> · scale).</summary>
     public const double DefaultRelTol = 1e-12;
+
+    /// <summary>
+    /// An end's accuracy refers to at least this share of the scale max(to − from, |from|, |to|), so an end at or near
+    /// 0 is solved to relTol · 1e-3 · scale rather than to nothing.
+    /// </summary>
+    public const double ZeroFloorShare = 1e-3;
 
     /// <summary>
     /// Intervals of [<paramref name="from"/>, <paramref name="to"/>] where <paramref name="f"/> &gt;= 0, in order.
@@ -30,7 +37,7 @@ public static class SignIntervals
         var ok = xs.Select(x => IsFeasible(f(x))).ToArray();
         var result = new List<(double, double)>();
         double? start = ok[0] ? from : null;
-        double tol = relTol * Math.Max(to - from, Math.Max(Math.Abs(from), Math.Abs(to)));
+        double floor = ZeroFloorShare * Math.Max(to - from, Math.Max(Math.Abs(from), Math.Abs(to)));
         for (int i = 1; i < xs.Length; i++)
         {
             if (ok[i] == ok[i - 1])
@@ -38,7 +45,7 @@ public static class SignIntervals
                 continue;
             }
 
-            double edge = Bisect(f, xs[i - 1], xs[i], ok[i - 1], tol);
+            double edge = Bisect(f, xs[i - 1], xs[i], ok[i - 1], relTol, floor);
             if (ok[i])
             {
                 start = edge;
@@ -62,9 +69,10 @@ public static class SignIntervals
 
     // Returns the feasible side's end of the bracket, so a reported interval never contains an infeasible point
     // by more than the tolerance.
-    private static double Bisect(Func<double, double> f, double a, double b, bool okAtA, double tol)
+    // The tolerance follows the shrinking bracket, so it ends up relative to the end itself.
+    private static double Bisect(Func<double, double> f, double a, double b, bool okAtA, double relTol, double floor)
     {
-        for (int i = 0; i < 200 && b - a > tol; i++)
+        for (int i = 0; i < 200 && b - a > relTol * Math.Max(floor, Math.Max(Math.Abs(a), Math.Abs(b))); i++)
         {
             double m = a + ((b - a) / 2.0);
             if (IsFeasible(f(m)) == okAtA)

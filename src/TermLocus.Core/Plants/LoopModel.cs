@@ -103,7 +103,10 @@ public sealed class LoopModel
     /// its roots are the closed-loop poles, hidden ones included. Not normalised: the leading coefficient is whatever
     /// the fractions give.
     /// </summary>
-    /// <exception cref="PlantFileException">The loop cannot be formed at these values, or the polynomial is identically zero.</exception>
+    /// <exception cref="PlantFileException">The loop cannot be formed at these values, the polynomial is identically
+    /// zero, or its roots cannot be computed in double precision (a leading coefficient negligible next to the others,
+    /// coefficients spread over hundreds of decades); every polynomial returned has roots that
+    /// <see cref="PolynomialRoots.Find(Polynomial)"/> finds.</exception>
     public Polynomial Characteristic(IReadOnlyDictionary<string, double> values) => parts.Characteristic(slots.Resolve(values));
 
     /// <summary>Like <see cref="Characteristic"/>, returning the located error instead of throwing.</summary>

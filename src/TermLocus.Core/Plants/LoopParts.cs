@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using System.Numerics;
 using TermLocus.Core.Algebra;
 using TermLocus.Core.Analysis;
@@ -12,6 +13,9 @@ namespace TermLocus.Core.Plants;
 /// </summary>
 internal sealed class LoopParts
 {
+    /// <summary>Pole magnitude, rad/s, past which a failed root search is blamed on a negligible leading coefficient.</summary>
+    public const double MaxPoleMagnitude = 1e300;
+
     private readonly LoopExpression? given;
     private readonly FeedbackSign feedback;
     private readonly ParsedExpression blame;
@@ -54,7 +58,7 @@ internal sealed class LoopParts
     }
 
     public Polynomial Characteristic(double[] slots) =>
-        given is not null ? GivenCharacteristic(slots) : FromLoopGain(LoopGain(slots));
+        WithComputablePoles(given is not null ? GivenCharacteristic(slots) : FromLoopGain(LoopGain(slots)));
 
     /// <summary>The product of the path's factors in order, nothing cancelled.</summary>
     public Fraction LoopGain(double[] slots) => Product(Path!.Factors(slots));
@@ -142,6 +146,38 @@ internal sealed class LoopParts
         return gain.IsUsable
             ? gain
             : throw new PlantFileException(blame.ErrorAt(0, "the loop gain controller*plant*sensor is not finite for these parameter values"));
+    }
+
+    // The closed-loop poles must be computable: a leading coefficient negligible next to the others (a sub-normal J,
+    // say) puts poles beyond what a double holds, and coefficients spread over hundreds of decades defeat the root
+    // finder. Solving once here turns both into a located error instead of a failure far from the file.
+    private Polynomial WithComputablePoles(Polynomial p)
+    {
+        if (p.Degree < 1 || PolynomialRoots.TryFind(p, out _))
+        {
+            return p;
+        }
+
+        var magnitudes = p.Coefficients.Where(c => c != 0.0).Select(Math.Abs).ToArray();
+        var message = LogRootBound(p) > Math.Log(MaxPoleMagnitude)
+            ? string.Create(CultureInfo.InvariantCulture, $"the characteristic polynomial's leading coefficient ({p.Leading:G3}) is negligible next to the others: a closed-loop pole would lie beyond {MaxPoleMagnitude:G1} rad/s for these parameter values")
+            : string.Create(CultureInfo.InvariantCulture, $"the closed-loop poles cannot be computed for these parameter values: the characteristic polynomial's coefficients range from {magnitudes.Min():G3} to {magnitudes.Max():G3}, too wide for double precision");
+        throw new PlantFileException(blame.ErrorAt(0, message));
+    }
+
+    // Fujiwara's bound 2·max_k |a(n-k)/a(n)|^(1/k) on every root's magnitude, as a natural logarithm (no overflow).
+    private static double LogRootBound(Polynomial p)
+    {
+        int n = p.Degree;
+        double logLeading = Math.Log(Math.Abs(p.Leading));
+        double logBound = double.NegativeInfinity;
+        for (int k = 1; k <= n; k++)
+        {
+            double c = Math.Abs(p[n - k]) / (k == n ? 2.0 : 1.0);
+            logBound = c == 0.0 ? logBound : Math.Max(logBound, (Math.Log(c) - logLeading) / k);
+        }
+
+        return logBound + Math.Log(2.0);
     }
 
     private Polynomial Checked(Polynomial p, string what)

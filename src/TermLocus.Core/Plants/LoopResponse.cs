@@ -27,7 +27,7 @@ namespace TermLocus.Core.Plants;
 /// <param name="Method">How the trace was made; <see cref="ResponseMethod.None"/> with a <paramref name="Failure"/>.</param>
 /// <param name="Trace">The step response (times in seconds from the step); null on failure.</param>
 /// <param name="IsStable">True when every closed-loop root is strictly stable in its plane.</param>
-/// <param name="SteadyState">The final value (the DC gain of reference to output); null when the loop is not
+/// <param name="SteadyState">The final value (the steady-state gain of reference to output); null when the loop is not
 /// strictly stable or on failure.</param>
 /// <param name="Figures">Rise, peak, overshoot and settling measured on the trace; null when
 /// <paramref name="SteadyState"/> is null.</param>

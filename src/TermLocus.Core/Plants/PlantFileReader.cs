@@ -119,6 +119,13 @@ public static class PlantFileReader
         }
         catch (Exception e) when (e is not PlantFileException and not OutOfMemoryException)
         {
+            // The parser's depth guard speaks of its own options and has no position; say it in the file's terms.
+            if (e.Message.Contains("maximum depth", StringComparison.OrdinalIgnoreCase))
+            {
+                throw context.Fail(context.Map.PositionAt(PlantNesting.FirstTooDeep(context.Text, PlantNesting.MaxDepth)),
+                    $"arrays and inline tables nested too deeply (more than {PlantNesting.MaxDepth} levels)");
+            }
+
             throw context.Fail(new SourcePosition(1, 1), "the TOML parser failed: " + PlantTextSafety.Visible(e.Message, 200));
         }
 

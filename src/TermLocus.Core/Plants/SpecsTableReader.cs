@@ -11,6 +11,12 @@ internal static class SpecsTableReader
         "min_natural_frequency", "max_natural_frequency", "max_overshoot_pct",
     ];
 
+    /// <summary>
+    /// Shortest time limit accepted, s. Each time limit T becomes a decay rate ln2/T or 4/T; below about 2e-308 that
+    /// overflows to infinity, which would reach the screen as the required decay rate.
+    /// </summary>
+    public const double MinTimeLimitSeconds = 1e-300;
+
     /// <summary>The specs; <see cref="Specs.None"/> when the table is absent.</summary>
     public static Specs Read(PlantSyntaxContext context, TableSyntaxBase? table)
     {
@@ -26,8 +32,8 @@ internal static class SpecsTableReader
         var specs = new Specs(
             MinDamping: Get("min_damping", x => x > -1 && x <= 1, "more than -1 and at most 1"),
             MinDecayRate: Get("min_decay_rate", x => x >= 0, "0 or more (1/s)"),
-            MaxTimeToHalfSeconds: Get("max_time_to_half", x => x > 0, "more than 0 seconds"),
-            MaxSettlingTimeSeconds: Get("max_settling_time", x => x > 0, "more than 0 seconds"),
+            MaxTimeToHalfSeconds: Get("max_time_to_half", x => x >= MinTimeLimitSeconds, "more than 0 seconds (at least 1e-300 s)"),
+            MaxSettlingTimeSeconds: Get("max_settling_time", x => x >= MinTimeLimitSeconds, "more than 0 seconds (at least 1e-300 s)"),
             MinNaturalFrequency: Get("min_natural_frequency", x => x >= 0, "0 or more (rad/s)"),
             MaxNaturalFrequency: Get("max_natural_frequency", x => x > 0, "more than 0 (rad/s)"),
             MaxOvershootPct: Get("max_overshoot_pct", x => x >= 0, "0 or more percent"));

@@ -112,11 +112,13 @@ internal static class TomlValues
     {
         var start = text.Span.Start.Offset;
         var decoded = TomlStringDecoder.Decode(text.Token?.Text ?? string.Empty);
+
+        // Compared once, not per character: per character it made a long expression quadratic (seconds for 100 kB).
+        var offsets = decoded is { } d && string.Equals(d.Value, value, StringComparison.Ordinal) ? d.Offsets : null;
         var builder = ImmutableArray.CreateBuilder<SourcePosition>(value.Length + 1);
         for (var i = 0; i <= value.Length; i++)
         {
-            var offset = decoded is { } d && d.Value == value ? start + d.Offsets[i] : start;
-            builder.Add(context.Map.PositionAt(offset));
+            builder.Add(context.Map.PositionAt(offsets is null ? start : start + offsets[i]));
         }
 
         return builder.MoveToImmutable();

@@ -4,11 +4,11 @@ namespace TermLocus.Core.Time;
 
 /// <summary>
 /// Figures of a simulated unit-step response, all relative to the steady-state value y∞ (the response is divided
-/// by y∞, so a negative DC gain is handled like a positive one). Times are in seconds on the trace's time axis
+/// by y∞, so a negative steady-state gain is handled like a positive one). Times are in seconds on the trace's time axis
 /// (they include any delay in the trace). A figure is null when the trace does not reach it, and every figure
 /// except <see cref="SteadyState"/> is null when y∞ = 0.
 /// </summary>
-/// <param name="SteadyState">y∞, the DC gain of the closed loop.</param>
+/// <param name="SteadyState">y∞, the steady-state gain of the closed loop.</param>
 /// <param name="RiseTimeSeconds">From the first crossing of 10 % of y∞ to the next crossing of 90 %, each linearly
 /// interpolated between samples; null when 90 % is never reached.</param>
 /// <param name="PeakTimeSeconds">Time of the largest value (refined by a parabola through the three samples about
@@ -31,7 +31,7 @@ public sealed record StepFigures(
     private const double WideBand = 0.05;
 
     /// <summary>
-    /// The DC gain N(0)/D(0) of a closed loop in s: the value its step response settles to. Null when the loop is
+    /// The steady-state gain N(0)/D(0) of a closed loop in s: the value its step response settles to. Null when the loop is
     /// not strictly stable (a pole with Re ≥ 0, which includes D(0) = 0), so no finite steady state exists.
     /// </summary>
     public static double? SteadyStateOf(RationalFunction closedLoop)
@@ -43,7 +43,7 @@ public sealed record StepFigures(
     }
 
     /// <summary>
-    /// The DC gain N(1)/D(1) of a sampled closed loop in z; null unless every pole lies strictly inside the unit
+    /// The steady-state gain N(1)/D(1) of a sampled closed loop in z; null unless every pole lies strictly inside the unit
     /// circle.
     /// </summary>
     public static double? SteadyStateOfSampled(RationalFunction closedLoopInZ)

@@ -7,7 +7,7 @@ namespace TermLocus.Core.Time;
 /// (<see cref="ResponseGrid.For"/>), the steady state, the measured figures and the second-order estimates.
 /// </summary>
 /// <param name="Trace">The exact sampled step response (times in seconds).</param>
-/// <param name="SteadyState">The DC gain; null when the loop is not strictly stable.</param>
+/// <param name="SteadyState">The steady-state gain; null when the loop is not strictly stable.</param>
 /// <param name="Figures">Figures measured on the trace; null when <paramref name="SteadyState"/> is null.</param>
 /// <param name="Estimate">Dominant-pole estimates; null when the loop is not strictly stable.</param>
 public sealed record StepResponseAnalysis(

@@ -18,7 +18,7 @@ namespace TermLocus.Core.Time;
 /// absolute error of a few ulps times (1 + max|e^{pᵢT}|)^{n−1} relative to the largest numerator coefficient
 /// (about 1e-13 for the textbook cases in the tests).
 /// <para>Limit of the polynomial form: when the sample time is short beside the loop's time constants, all poles
-/// crowd near z = 1 and the coefficients of a polynomial in z can no longer hold them: near z = 1 (the DC gain,
+/// crowd near z = 1 and the coefficients of a polynomial in z can no longer hold them: near z = 1 (the steady-state gain,
 /// the slow modes, the step response) about 1e-16·2ⁿ/Π|pᵢT| of relative accuracy is left, whatever the method
 /// (see <see cref="AccuracyEstimate"/>). Two poles at |p|T = 1e-3 keep about 10 digits, five at 1e-2 about 7,
 /// eight at 1e-3 none.</para>

@@ -69,6 +69,7 @@ internal sealed class CliApp(CliContext context, Func<WorkbenchRequest, int> run
             root.Subcommands.Add(verb.Build(context));
         }
 
+        HelpWithKeys.Install(root, context);
         root.SetAction(result => runWorkbench(new WorkbenchRequest(
             result.GetValue(path), result.GetValue(noColor), result.GetValue(symbols), result.GetValue(noMouse))));
         return root;

@@ -9,7 +9,7 @@ namespace TermLocus.Tui;
 /// <summary>
 /// Colours and styles. With colour: the terminal's own foreground and background plus the 16 ANSI colours (no dark
 /// blue on black; branch colours chosen to stay apart for common colour-vision deficiencies). Without colour (NO_COLOR,
-/// --no-color): the terminal's colours only, with reverse video and bold carrying selection and emphasis.
+/// --no-color): the terminal's colours only, with reverse attribute and bold carrying selection and emphasis.
 /// </summary>
 internal sealed class Palette
 {

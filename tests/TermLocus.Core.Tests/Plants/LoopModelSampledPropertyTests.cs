@@ -45,7 +45,7 @@ public class LoopModelSampledPropertyTests
     [Fact]
     public void Sampling_keeps_the_steady_state_of_a_stable_loop()
     {
-        // A hold equivalent has the plant's DC gain, G_hold(1) = G(0) (step invariance, definition), so a sampled loop
+        // A hold equivalent has the plant's steady-state gain, G_hold(1) = G(0) (step invariance, definition), so a sampled loop
         // that is stable settles where the continuous loop K·G(0)/(1 + K·G(0)) would.
         var gen = Gen.Select(Rate.Array[1, 3], Gen.Double[0.01, 0.3], Gen.Double[0.05, 2.0]);
         gen.Sample((poles, t, k) =>

@@ -90,7 +90,7 @@ public class ZeroOrderHoldTests
     [InlineData(5, 1e-3)]
     public void Documented_accuracy_estimate_bounds_the_step_invariance_error(int order, double t)
     {
-        // Π (s + i), i = 1..order, unit DC gain; the continuous response is exact, so any difference from the
+        // Π (s + i), i = 1..order, unit steady-state gain; the continuous response is exact, so any difference from the
         // equivalent's response is the z-polynomial form's error (step invariance: definition of the hold).
         var den = Polynomial.One;
         for (int i = 1; i <= order; i++)

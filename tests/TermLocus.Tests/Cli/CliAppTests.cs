@@ -42,3 +42,25 @@ public class CliAppTests
         Assert.Throws<UsageException>(() => ValueOverrides.Parse(["Kc=NaN"]));
     }
 }
+
+public class CliHelpTests
+{
+    [Fact]
+    public void Root_help_lists_the_verbs_and_the_workbench_keys_from_the_key_table()
+    {
+        var (code, stdout, _) = CliRunner.Run("--help");
+        Assert.Equal(0, code);
+        foreach (var verb in new[] { "check", "analyze", "trace", "plot", "response", "save" })
+        {
+            Assert.Contains(verb, stdout, StringComparison.Ordinal);
+        }
+
+        Assert.Contains("Workbench keys:", stdout, StringComparison.Ordinal);
+        foreach (var binding in TermLocus.App.Workbench.KeyMap.Bindings.Select(b => b.Description).Distinct())
+        {
+            Assert.Contains(binding, stdout.Replace("\n  ", " ", StringComparison.Ordinal), StringComparison.Ordinal);
+        }
+
+        Assert.Contains("no substitute for", stdout, StringComparison.Ordinal);
+    }
+}

@@ -1,0 +1,142 @@
+using System.Collections.Immutable;
+using TermLocus.App.Text;
+using TermLocus.App.Workbench;
+using TermLocus.Core.Analysis;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.App.Reports;
+
+/// <summary>
+/// The text report of <c>termlocus design</c>: the span and band searched, the feasible intervals with what limits
+/// each end, the intervals as a bar, and the recommended value with its smallest margin from the full band check.
+/// </summary>
+public static class DesignReportPresenter
+{
+    /// <summary>Cells of the interval bar (its labels and brackets fit the 100-column width around it).</summary>
+    public const int BarCells = 60;
+
+    /// <summary>The report's lines (at most <see cref="CheckReportPresenter.Width"/> columns each).</summary>
+    /// <param name="file">The file as the user named it.</param>
+    /// <param name="plant">The plant designed.</param>
+    /// <param name="result">The design.</param>
+    /// <param name="glyphs">Symbols to use.</param>
+    public static ImmutableArray<string> Lines(string file, Plant plant, DesignResult result, Glyphs glyphs)
+    {
+        ArgumentNullException.ThrowIfNull(plant);
+        ArgumentNullException.ThrowIfNull(result);
+        var lines = ImmutableArray.CreateBuilder<string>();
+        string p = SafeText.Visible(result.Sweep);
+        string unit = plant.SweptParameter.Unit.Length > 0 ? " " + SafeText.Visible(plant.SweptParameter.Unit) : string.Empty;
+        lines.Add(SafeText.Fit($"{SafeText.Visible(file)}  {SafeText.Visible(plant.Title)}", CheckReportPresenter.Width));
+        lines.Add($"  sweep: {p} from {Num(result.Span.Low)} to {Num(result.Span.High)}{unit}");
+        lines.AddRange(Band(result));
+        lines.Add(SafeText.Fit("  specs: " + Specs(plant.Specs, glyphs), CheckReportPresenter.Width));
+        if (plant.Specs.MaxOvershootPct is not null)
+        {
+            lines.Add("  note: max_overshoot_pct is a response figure, not a pole limit; the design does not use it");
+        }
+
+        AddIntervals(lines, result, p);
+        if (result.Recommended is { } r)
+        {
+            AddRecommendation(lines, result, r, p, unit, glyphs);
+        }
+
+        return lines.ToImmutable();
+    }
+
+    private static IEnumerable<string> Band(DesignResult result)
+    {
+        if (result.Box.Axes.IsEmpty)
+        {
+            yield return "  band: none (no toleranced parameter besides the swept one); intervals judged at nominal";
+            yield break;
+        }
+
+        yield return SafeText.Fit($"  band: {BandWording.Box(result.Box)}", CheckReportPresenter.Width);
+        yield return $"  intervals judged at nominal and the {result.Box.CornerCount} corners of the band; points inside it";
+        yield return "  are searched only at the recommended value";
+    }
+
+    private static string Specs(Specs specs, Glyphs g)
+    {
+        var limits = SpecCheck.Limits(specs);
+        return limits.Count == 0
+            ? "none: the intervals are where the closed loop is stable"
+            : string.Join(", ", limits.Select(l =>
+            {
+                string relation = SpecWording.IsMinimum(l.Spec.Key()) ? g.AtLeast : g.AtMost;
+                string u = l.Spec.Unit();
+                return $"{l.Spec.Key()} {relation} {NumberText.Exact(l.Limit)}{(u.Length > 0 ? " " + u : string.Empty)}";
+            }));
+    }
+
+    private static void AddIntervals(ImmutableArray<string>.Builder lines, DesignResult result, string p)
+    {
+        if (result.Intervals.IsEmpty)
+        {
+            lines.Add($"  feasible {p}: none; no value in the span meets every spec at every band point checked");
+            lines.Add($"  {Num(result.Span.Low)} {DesignBar.Line(result.Span, [], null, BarCells)} {Num(result.Span.High)}");
+            return;
+        }
+
+        lines.Add($"  feasible {p}: {result.Intervals.Length} interval{(result.Intervals.Length == 1 ? string.Empty : "s")}");
+        foreach (var i in result.Intervals)
+        {
+            string range = $"    {Num(i.From)} .. {Num(i.To)}   width {NumberText.Short(i.Width, 6)}";
+            string ends = Ends(i);
+            if (range.Length + 3 + ends.Length <= CheckReportPresenter.Width)
+            {
+                lines.Add($"{range}   {ends}");
+            }
+            else
+            {
+                lines.Add(range);
+                lines.Add(SafeText.Fit("      " + ends, CheckReportPresenter.Width));
+            }
+        }
+
+        lines.Add($"  {Num(result.Span.Low)} {DesignBar.Line(result.Span, result.Intervals, result.Recommended?.Value, BarCells)} {Num(result.Span.High)}");
+    }
+
+    private static string Ends(FeasibleInterval i)
+    {
+        string below = i.FromLimitedBy.IsEmpty ? "span start" : string.Join(" and ", i.FromLimitedBy);
+        string above = i.ToLimitedBy.IsEmpty ? "span end" : string.Join(" and ", i.ToLimitedBy);
+        return $"below: {below}; above: {above}";
+    }
+
+    private static void AddRecommendation(ImmutableArray<string>.Builder lines, DesignResult result, DesignRecommendation r,
+        string p, string unit, Glyphs g)
+    {
+        lines.Add($"  recommended: {p} = {NumberText.Short(r.Value, 6)}{unit} (largest smallest margin in the widest interval)");
+        var m = r.SmallestMargin;
+        string where = BandWording.Point(result.Box, m.At) + (m.AtCorner ? string.Empty : " (inside the band)");
+        string figure = m.Spec == DesignMargin.StabilityKey
+            ? $"slowest decay rate {g.DecayRate} {NumberText.Significant(m.Margin)} 1/s"
+            : $"{SafeText.Visible(m.Spec)} {NumberText.Significant(m.Margin)}{UnitOf(m.Spec)} ({Percent(m.RelativeMargin)} of the limit)";
+        lines.Add(SafeText.Fit($"    smallest margin across the band: {figure} at {where}", CheckReportPresenter.Width));
+        string check = $"    band check at {p} = {NumberText.Short(r.Value, 6)} (corners and interior search): ";
+        lines.Add(SafeText.Fit(r.Confirmed ? check + $"pass {g.Met}" : check + $"FAIL {g.Violated} " + Misses(result.Box, r.Check),
+            CheckReportPresenter.Width));
+    }
+
+    // What the full check found that the corners did not: an interior point of the band, or a limit the design does
+    // not use (overshoot, judged on the simulated response).
+    private static string Misses(ToleranceBox box, LoopCheckResult check)
+    {
+        if (!check.StableAcrossBand)
+        {
+            return "unstable" + (check.WorstDecayRate is { } w ? " at " + BandWording.Point(box, w.At.Toleranced) : string.Empty);
+        }
+
+        return string.Join("; ", check.Violated.Select(v => $"{v.Key} missed at {BandWording.Point(box, v.At)}"));
+    }
+
+    private static string UnitOf(string key) =>
+        SpecKindText.TryParseKey(key, out var kind) && kind.Unit().Length > 0 ? " " + kind.Unit() : string.Empty;
+
+    private static string Percent(double relative) => NumberText.Significant(100.0 * relative, 3) + " %";
+
+    private static string Num(double value) => NumberText.Short(value, 10);
+}

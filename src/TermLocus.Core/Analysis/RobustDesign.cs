@@ -1,0 +1,128 @@
+using System.Collections.Immutable;
+using TermLocus.Core.Plants;
+
+namespace TermLocus.Core.Analysis;
+
+/// <summary>
+/// Robust design of the swept parameter: the intervals of its span where every pole limit of the specs holds, and
+/// every pole is strictly stable, at every point of the tolerance band checked; and a recommended value inside the
+/// widest interval.
+/// <para>Points checked: the intervals are judged at the nominal point and every corner of the tolerance box, not
+/// inside it. A figure can be worst inside the box (a damping ratio that dips mid-band); that is searched for only at
+/// the recommended value, by <see cref="LoopCheck.Run"/>, whose result comes with the recommendation.</para>
+/// <para>Method: the feasibility of a swept value p is the smallest relative margin over those points and limits
+/// (negative when some pole is not strictly stable). Its sign changes are bracketed on a uniform grid of
+/// <see cref="GridPoints"/> values plus every point's own spec boundaries and stability crossings (the exact values
+/// the locus engine solves, see <see cref="SpecBoundaries"/>, <see cref="LocusFacts"/>), and the midpoints next to
+/// them; then each end is bisected to <see cref="SignIntervals.DefaultRelTol"/> of its own value (far better than
+/// 1e-9 relative; an end at 0 to 1e-15 of the span's scale). Between consecutive hints the feasibility cannot change sign, so intervals narrower than a grid
+/// step are found too, as long as the locus engine finds each point's boundaries.</para>
+/// <para>The recommended value maximises the smallest relative margin (the slowest decay rate, 1/s, when the file
+/// sets no pole limits) over the same points inside the widest interval: sampled at <see cref="RecommendSamples"/>
+/// values, then refined by golden-section search around the best sample. The margin is a minimum of smooth pieces,
+/// so its maximum is often a kink where two limits are equally tight; golden-section search needs no derivative.</para>
+/// <para><c>max_overshoot_pct</c> is a property of the simulated response, not of poles, and is not part of a design.</para>
+/// </summary>
+public static class RobustDesign
+{
+    /// <summary>Uniform grid values over the span that bracket changes the hints do not give.</summary>
+    public const int GridPoints = 401;
+
+    /// <summary>Samples of the widest interval before the recommended value is refined.</summary>
+    public const int RecommendSamples = 41;
+
+    /// <summary>
+    /// Spec boundaries and stability crossings are solved per point (a locus trace each) only up to this many corners;
+    /// a bigger box relies on the nominal point's hints and the grid.
+    /// </summary>
+    public const int MaxHintedCorners = 64;
+
+    /// <summary>Intervals no wider than this share of the span's scale are rounding touches of a boundary and dropped.</summary>
+    public const double MinWidthShare = 1e-10;
+
+    /// <summary>
+    /// Designs <paramref name="model"/>'s swept parameter over <paramref name="span"/>, the other parameters at
+    /// <paramref name="values"/> (missing names take their nominal value; the swept parameter's own value is not used).
+    /// </summary>
+    /// <exception cref="ArgumentException">The span is empty or not finite, or a value names no parameter or is not finite.</exception>
+    /// <exception cref="PlantFileException">The loop cannot be formed at some point of the band (away from the swept
+    /// parameter), or at the recommended value.</exception>
+    public static DesignResult Find(LoopModel model, IReadOnlyDictionary<string, double> values, Interval span)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(values);
+        if (!(span.Low < span.High) || !double.IsFinite(span.Low) || !double.IsFinite(span.High))
+        {
+            throw new ArgumentException($"The span must be finite with low < high (got {span.Low}, {span.High}).", nameof(span));
+        }
+
+        var plant = model.Plant;
+        string sweep = plant.Loop.Sweep;
+        var full = plant.NominalValues().SetItems(values);
+        var box = ToleranceBox.FromPlant(plant, sweep, full);
+        var points = DesignPoints.Create(model, full, box);
+        double scale = Scale(span);
+        var found = SignIntervals.Find(p => points.At(p).Feasibility, span.Low, span.High, GridPoints,
+            Candidates(points, model, span));
+        var intervals = found
+            .Where(i => i.To - i.From > MinWidthShare * scale)
+            .Select(i => DesignLimits.Describe(points, span, i.From, i.To))
+            .ToImmutableArray();
+        DesignRecommendation? recommended = null;
+        if (intervals.MaxBy(i => i.Width) is { } widest)
+        {
+            double best = DesignOptimum.Maximize(p => Objective(points, p), widest.From, widest.To, RecommendSamples, scale);
+            var check = LoopCheck.Run(model, full.SetItem(sweep, best));
+            recommended = new DesignRecommendation(best, SmallestMargin(check, points.Limits), check);
+        }
+
+        return new DesignResult(sweep, span, box, points.Points.Length, intervals, recommended);
+    }
+
+    /// <summary>The scale relative tolerances refer to: max(span width, |low|, |high|).</summary>
+    internal static double Scale(Interval span) => Math.Max(span.Width, Math.Max(Math.Abs(span.Low), Math.Abs(span.High)));
+
+    private static double Objective(DesignPoints points, double p)
+    {
+        var m = points.At(p);
+        return m.Formed && m.Stable ? m.Smallest : double.NegativeInfinity;
+    }
+
+    // Every point's hints, and the midpoints beside each hint (between it and its neighbours among the hints and the
+    // grid): feasibility is constant between consecutive exact hints, so a midpoint decides each gap.
+    private static List<double> Candidates(DesignPoints points, LoopModel model, Interval span)
+    {
+        int hinted = points.Points.Length - 1 <= MaxHintedCorners ? points.Points.Length : 1;
+        var hints = points.Points.Take(hinted)
+            .SelectMany(point => DesignHints.For(point.Family, model.Plane, span, model.Plant.Specs))
+            .ToHashSet();
+        var all = Enumerable.Range(0, GridPoints)
+            .Select(i => span.Low + (span.Width * i / (GridPoints - 1)))
+            .Concat(hints).Order().Distinct().ToArray();
+        var result = new List<double>(hints);
+        for (int i = 0; i + 1 < all.Length; i++)
+        {
+            if (hints.Contains(all[i]) || hints.Contains(all[i + 1]))
+            {
+                result.Add(all[i] + ((all[i + 1] - all[i]) / 2.0));
+            }
+        }
+
+        return result;
+    }
+
+    // Over the pole limits the design works with (the check also judges overshoot, on the simulated response).
+    private static DesignMargin SmallestMargin(LoopCheckResult check, IReadOnlyList<(SpecKind Spec, double Limit)> limits)
+    {
+        var tightest = check.Band.Where(b => limits.Any(l => l.Spec == b.Spec)).MinBy(b => b.WorstRelativeMargin);
+        if (check.StableAcrossBand && tightest is not null)
+        {
+            return new DesignMargin(tightest.Key, tightest.WorstMargin, tightest.WorstRelativeMargin, tightest.At, tightest.AtCorner);
+        }
+
+        var slowest = check.WorstDecayRate;
+        double sigma = slowest?.Value ?? double.PositiveInfinity;
+        return new DesignMargin(DesignMargin.StabilityKey, sigma, sigma,
+            slowest?.At.Toleranced ?? ImmutableDictionary<string, double>.Empty, slowest?.At.IsCorner ?? true);
+    }
+}
