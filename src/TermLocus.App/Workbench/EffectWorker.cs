@@ -14,6 +14,7 @@ public sealed class EffectWorker(SaveContext saveContext)
         LoadPlantEffect e => Load(e.Path),
         ScanLibraryEffect e => Scan(e.Folder),
         TraceLocusEffect e => Trace(e),
+        DesignEffect e => CoreBridge.Design(e.Loaded),
         CheckBandEffect e => CoreBridge.CheckBand(e.Loaded, e.SweptValue),
         SimulateResponseEffect e => CoreBridge.Simulate(e.Loaded, e.Values, e.Key),
         SaveOperatingPointEffect e => Save(e),

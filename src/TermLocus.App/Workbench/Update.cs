@@ -29,6 +29,7 @@ public static class Update
             Command.NextVariedParameter => Banding.NextParameter(s),
             Command.JumpToRangeStart => Sweeping.ToRangeEnd(s, atStart: true),
             Command.JumpToRangeEnd => Sweeping.ToRangeEnd(s, atStart: false),
+            Command.JumpToRecommended => Sweeping.ToRecommended(s),
             Command.JumpToPreviousBoundary => Sweeping.ToMark(s, -1),
             Command.JumpToNextBoundary => Sweeping.ToMark(s, +1),
             Command.RevertToSavedValue => Sweeping.Revert(s),
@@ -72,6 +73,9 @@ public static class Update
                 Message = StatusMessage.Error("not saved: " + Text.SafeText.Visible(m.Problem)),
             }),
             BandCheck m => Arrivals.BandChecked(state, m),
+            Designed m => Done(state.Session is { } session && session.Loaded.Plant.Path == m.PlantPath
+                ? state with { Session = session with { Design = m } }
+                : state),
             ResponseView m => Arrivals.ResponseSimulated(state, m),
             CharacterTyped m => Overlays.Type(state, m.Character),
             ValuePicked m => Sweeping.Pick(state, m.Value),

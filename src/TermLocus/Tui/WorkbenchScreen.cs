@@ -204,7 +204,7 @@ internal sealed class WorkbenchScreen : Runnable
     }
 
     private static object PlaneInputs(WorkbenchState s) =>
-        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.Session?.Band, s.Session?.CurrentLoop, s.View, s.Focus,
+        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.Session?.Band, s.Session?.CurrentLoop, s.Session?.Design, s.View, s.Focus,
             s.Session?.SelectedPole, s.Overlay is NoOverlay);
 
     private static object ResponseInputs(WorkbenchState s) =>
