@@ -23,7 +23,8 @@ internal sealed class PlanePane : View
     private string heading = string.Empty;
     private RenderedPlane? last;
     private string? lastBar;
-    private (int Width, int Height, bool Legend, bool Bar, string Heading) lastFrame;
+    private (int Width, int Height, bool Legend, bool Bar) lastFrame;
+    private string lastHeading = string.Empty;
 
     public PlanePane(Func<WorkbenchState> state, Action<Message> deliver, Palette palette, CanvasSymbols symbols, FrameGlyphs frame)
     {
@@ -79,12 +80,20 @@ internal sealed class PlanePane : View
         }
 
         DrawCount++;
-        var currentFrame = (Viewport.Width, Viewport.Height, ShowsLegend, ShowsDesignBar, heading);
+        var currentFrame = (Viewport.Width, Viewport.Height, ShowsLegend, ShowsDesignBar);
         bool full = last is null || last.Columns != columns || last.Rows != rows || lastFrame != currentFrame;
         if (full)
         {
             DrawFrame(columns, rows);
         }
+        else if (heading != lastHeading)
+        {
+            // "tracing…" comes and goes with each trace: only the top edge changes, not the plot.
+            SetAttribute(palette.For(Tone.Normal));
+            AddStr(0, 0, frame.Top(heading, Viewport.Width));
+        }
+
+        lastHeading = heading;
 
         string? bar = DesignBarPresenter.Line(state().Session, columns, glyphs);
         if (bar is not null && (full || bar != lastBar))
