@@ -11,6 +11,7 @@ namespace TermLocus.App.Workbench;
 public static class DesignBarPresenter
 {
     private const int MinimumCells = 8;
+    private const int ComfortableCells = 20;
 
     /// <summary>The line, exactly <paramref name="width"/> columns; null when the plant has no design to show.</summary>
     public static string? Line(PlantSession? session, int width, Glyphs g)
@@ -32,10 +33,17 @@ public static class DesignBarPresenter
 
     private static string Bar(Core.Analysis.DesignResult result, double value, string name, int width, Glyphs g)
     {
-        string prefix = $"feasible {name} ";
         string suffix = result.Recommended is { } r && result.Widest is { } w
             ? $" {NumberText.Short(w.From, 4)}..{NumberText.Short(w.To, 4)} d {NumberText.Short(r.Value, 4)}"
             : " none";
+
+        // "feasible" goes first when room is short: the bar's cells say more.
+        string prefix = $"feasible {name} ";
+        if (width - TextWidth.Of(prefix) - TextWidth.Of(suffix) - 2 < ComfortableCells)
+        {
+            prefix = name + " ";
+        }
+
         int cells = Math.Min(60, width - TextWidth.Of(prefix) - TextWidth.Of(suffix) - 2);
         if (cells < MinimumCells || !(result.Span.Width > 0))
         {

@@ -224,8 +224,11 @@ internal sealed class WorkbenchScreen : Runnable
         plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + name + zoom + tracing;
         poles.Heading = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
         string simulating = state.Session is { ResponseIsCurrent: false } ? "  simulating" + glyphs.Ellipsis : string.Empty;
-        response.Heading = "step response" + (state.Session is { } session
-            ? $" at {session.Sweep.Name} = {NumberText.Short(session.Sweep.Value)}" : string.Empty) + simulating;
+        string at = state.Session is { } session
+            ? $" at {session.Sweep.Name} = {NumberText.Short(session.Sweep.Value)}"
+              + (session.Varied.IsNominal ? string.Empty : ", " + StatusLinePresenter.VariedWords(session.Varied))
+            : string.Empty;
+        response.Heading = "step response" + at + simulating;
         overlay.Heading = state.Overlay switch
         {
             HelpOverlay => "help (Esc closes)",
