@@ -13,6 +13,8 @@ xterm would, so start-up is not held up waiting for replies that never come.
 In tmux at the same size it then measures the floors each step is compared with: the cells whose character or
 colour changed (captured with `tmux capture-pane -e` before and after the step), their bytes alone, and their bytes
 plus one cursor move per run of changed cells; and the bytes tmux received for the step (pipe-pane), as a check.
+With --floor-bin it also runs tests/perf/PollFloor for the idle-CPU floor: the CPU that Terminal.Gui 2.5's two idle
+waits (main loop 25 turns a second, input poll every 20 ms) cost on their own on this machine.
 
 Prints one line per figure and, with --json FILE, writes them all. Exit 1 when a budget is missed and --strict.
 """
@@ -306,6 +308,14 @@ def tmux_floors(opts):
         subprocess.run(["rm", "-rf", work])
 
 
+def idle_cpu_floor(floor_bin, seconds):
+    """CPU % of a core used by the PollFloor program (Terminal.Gui's two idle waits and nothing else)."""
+    with tempfile.NamedTemporaryFile("r") as out:
+        subprocess.run(["/usr/bin/time", "-f", "%U %S %e", "-o", out.name, floor_bin, str(seconds)], check=True)
+        user, system, wall = (float(x) for x in out.read().split()[-3:])
+    return 100 * (user + system) / wall
+
+
 def median(values):
     values = [v for v in values if v is not None]
     return statistics.median(values) if values else None
@@ -324,6 +334,7 @@ def main():
     ap.add_argument("--json", help="write every figure to this file")
     ap.add_argument("--strict", action="store_true", help="exit 1 when a budget is missed")
     ap.add_argument("--no-tmux", action="store_true", help="skip the floors measured in tmux")
+    ap.add_argument("--floor-bin", help="the published tests/perf/PollFloor program, for the idle-CPU floor")
     ap.add_argument("--nice", type=int, help="run the program under nice -n NICE (e.g. -15 on a busy machine, as root)")
     opts = ap.parse_args()
     opts.bin = os.path.abspath(opts.bin)
@@ -356,6 +367,8 @@ def main():
         "idle_cpu_pct": live["idle_cpu_pct"],
         "exit_codes": [r["exit_code"] for r in runs],
     }
+    if opts.floor_bin:
+        figures["idle_cpu_floor_pct"] = idle_cpu_floor(os.path.abspath(opts.floor_bin), opts.idle)
     if not opts.no_tmux:
         floors = tmux_floors(opts)
         figures.update({
