@@ -1,88 +1,45 @@
-using System.Collections.Immutable;
+using System.Runtime.CompilerServices;
 using BenchmarkDotNet.Attributes;
-using TermLocus.App.Canvas;
-using TermLocus.App.Text;
 using TermLocus.App.Workbench;
 
 namespace TermLocus.Benchmarks;
 
 /// <summary>
-/// One arrow-key step of the workbench on a degree-10 loop at 160x48, everything but the terminal: the update (new
-/// value, closed-loop poles, spec check), then the s-plane, pole table, parameter panel and status lines rendered
-/// to text for the panes of the 160x48 layout. Target: under 2 ms median. The locus is traced once in the setup,
-/// as in the workbench, where a step does not trace again.
+/// What one keystroke costs on the UI thread, on two demo plants (a PI conveyor loop with a toleranced inertia; a heat
+/// exchanger with a transport delay, whose band check simulates the overshoot through the delay): a step of
+/// the swept value (poles, trails across the band, per-pole band figures; the band check and the trace are effects
+/// and not part of it) and a step of the varied parameter (the loop rebuilt at the new place in the band). Target:
+/// under 5 ms each, so a held arrow key stays smooth. The band check an effect then runs is measured on its own.
 /// </summary>
 [MemoryDiagnoser]
 [MedianColumn]
 public class WorkbenchStepBenchmarks
 {
-    private const int Width = 160;
-    private const int Height = 48;
-    private const int StepsEachWay = 20;
+    private WorkbenchState opened = WorkbenchState.Initial(null);
+    private EffectWorker worker = new(new SaveContext(() => DateTimeOffset.UnixEpoch, "bench@host"));
+    private CheckBandEffect check = null!;
 
-    private readonly Glyphs glyphs = Glyphs.Unicode;
-    private ScreenLayout layout = ScreenLayout.For(Width, Height);
-    private WorkbenchState state = WorkbenchState.Initial(null);
-    private string plantFile = string.Empty;
-    private int stepCount;
+    /// <summary>The demo plant file.</summary>
+    [Params("conveyor-speed.toml", "heat-exchanger-outlet.toml")]
+    public string File { get; set; } = "conveyor-speed.toml";
 
     [GlobalSetup]
     public void Setup()
     {
-        plantFile = FlexibleDrivePlant.WriteToTemporaryFolder();
-        var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UnixEpoch, "bench@rig"));
-        var (start, effects) = Update.Start(plantFile, null);
-        state = RunToCompletion(start, effects, worker);
-        if (state.Session is not { Locus: not null } session)
-        {
-            throw new InvalidOperationException("the benchmark plant did not load and trace: " + state.Message?.Text);
-        }
-
-        layout = ScreenLayout.For(Width, Height);
-        Console.WriteLine(FormattableString.Invariant(
-            $"// {session.Poles.Poles.Length} closed-loop poles, {session.Locus.Branches.Length} branches, plane {layout.Plane.Width}x{layout.Plane.Height}"));
+        var loaded = (PlantLoaded)worker.Perform(new LoadPlantEffect(Plant(File)))!;
+        opened = Update.Receive(Update.Start(null, null).State, loaded).State;
+        check = new CheckBandEffect(loaded.Loaded, loaded.Loaded.Plant.SweptParameter.Value * 1.1);
     }
 
-    [GlobalCleanup]
-    public void Cleanup() => FlexibleDrivePlant.Delete(plantFile);
-
-    /// <summary>Steps up twenty times, then down twenty times, so every call does the same kind of work.</summary>
     [Benchmark]
-    public int OneKeystroke()
-    {
-        var command = (stepCount++ / StepsEachWay) % 2 == 0 ? Command.StepSweepUp : Command.StepSweepDown;
-        state = Update.Apply(state, command).State;
-        return RenderScreen(state);
-    }
+    public WorkbenchState SweptValueStep() => Update.Apply(opened, Command.StepSweepUp).State;
 
-    /// <summary>The text of every pane a step changes; returns the character count so nothing is optimised away.</summary>
-    private int RenderScreen(WorkbenchState s)
-    {
-        var plane = PlanePresenter.Render(s, layout.Plane.Width - 2, layout.Plane.Height - 2, CanvasSymbols.Braille);
-        var poles = PoleTablePresenter.Lines(s.Session!.Poles, null, layout.Poles.Width - 2, layout.Poles.Height - 2, glyphs);
-        var parameters = ParameterPanelPresenter.Lines(s.Session, layout.Parameters.Width - 2, layout.Parameters.Height - 2, glyphs);
-        var status = StatusLinePresenter.Lines(s, layout.Status.Width, layout.Status.Height, glyphs);
-        return Length(plane.Lines) + Length(poles) + Length(parameters) + Length(status);
-    }
+    [Benchmark]
+    public WorkbenchState BandStep() => Update.Apply(opened, Command.StepBandUp).State;
 
-    private static int Length(IEnumerable<string> lines) => lines.Sum(l => l.Length);
+    [Benchmark]
+    public Message? BandCheckEffect() => worker.Perform(check);
 
-    private static WorkbenchState RunToCompletion(WorkbenchState state, ImmutableArray<Effect> effects, EffectWorker worker)
-    {
-        var queue = new Queue<Effect>(effects);
-        while (queue.TryDequeue(out var effect))
-        {
-            if (worker.Perform(effect) is { } message)
-            {
-                var (next, more) = Update.Receive(state, message);
-                state = next;
-                foreach (var e in more)
-                {
-                    queue.Enqueue(e);
-                }
-            }
-        }
-
-        return state;
-    }
+    private static string Plant(string file, [CallerFilePath] string here = "") =>
+        Path.GetFullPath(Path.Combine(Path.GetDirectoryName(here)!, "..", "..", "plants", file));
 }

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # End-to-end check of the real `termlocus` workbench in tmux at 80x24: step the swept value and see the pole table
-# change, open and close help, quit (answering the unsaved-value question), end a second run with SIGTERM, and check
+# change, step the toleranced parameter through its band (up arrow), show and hide the step response (t), open and
+# close help, quit (answering the unsaved-value question), end a second run with SIGTERM, and check
 # after each run that the terminal was given back: the shell prompt is there, the alternate screen and mouse
 # reporting are off and the cursor is visible. Uses a private tmux server, a copy of the demo plants and a fresh build.
 # Exit 0 when every check passed, 1 when one failed, 2 when it could not run (no tmux or dotnet).
@@ -73,6 +74,19 @@ check "two right-arrow steps give Kp = 8" wait_for 'Kp = 8 '
 after=$(pole_rows)
 check "the pole table changed" [ -n "$after" -a "$before" != "$after" ]
 check "the value is marked unsaved" wait_for 'unsaved'
+tm send-keys -t e2e Up
+check "up arrow steps J a tenth of its band (0.42 to 0.44)" wait_for 'J = 0.44 kg'
+check "the panel gives its offset from nominal" wait_for '\(\+4\.8 %\)'
+check "the pole table has the band columns" wait_for 'ζ band'
+tm send-keys -t e2e 0
+check "0 puts J back to nominal" wait_for 'J = 0.42 kg\*m\^2 \(nominal\)'
+tm send-keys -t e2e t
+check "t shows the step response in place of the plane" wait_for 'step response at Kp = 8'
+check "the response figures are shown beside the estimates" wait_for 'overshoot %'
+tm send-keys -t e2e Right
+check "the response follows the next step" wait_for 'step response at Kp = 9'
+tm send-keys -t e2e Left t
+check "t again brings the plane back" wait_for '▸ s-plane'
 tm send-keys -t e2e '?'
 check "? opens help generated from the key table" wait_for 'step the swept value up'
 tm send-keys -t e2e Escape

@@ -23,7 +23,7 @@ internal static class Arrivals
             Overlay = s.Overlay is LibraryOverlay ? Overlay.None : s.Overlay,
             Message = StatusMessage.Info("opened " + SafeText.Visible(Path.GetFileName(plant.Path))),
         };
-        return (state, effects);
+        return loaded.Model is null ? (state, effects) : (state, effects.Add(new DesignEffect(loaded)));
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) LocusTraced(WorkbenchState s, LocusAnalysis analysis)

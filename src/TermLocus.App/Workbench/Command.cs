@@ -39,6 +39,9 @@ public enum Command
     /// <summary>Open the box to type an exact swept value.</summary>
     EnterValue,
 
+    /// <summary>Set the swept value to the recommended one of the robust design.</summary>
+    JumpToRecommended,
+
     /// <summary>Set the swept value to the nearest spec boundary or stability crossing below it.</summary>
     JumpToPreviousBoundary,
 

@@ -82,10 +82,17 @@ internal static partial class CoreBridge
 
     /// <summary>Writes the value and an operating point into the plant file; returns the file as now on disk.</summary>
     /// <exception cref="IOException">The save was refused or failed (the message says why); the file is unchanged.</exception>
-    public static PlantDocument SaveOperatingPoint(LoadedPlant loaded, double value, string verdict, SaveContext context)
+    /// <param name="loaded">The plant as read.</param>
+    /// <param name="value">The swept value.</param>
+    /// <param name="verdict">The verdict line, or null to run the band check for it here.</param>
+    /// <param name="context">Time and user.</param>
+    /// <param name="name">The operating point's name, or null for "name = value".</param>
+    /// <param name="note">Its note, or null for the default.</param>
+    public static PlantDocument SaveOperatingPoint(
+        LoadedPlant loaded, double value, string? verdict, SaveContext context, string? name = null, string? note = null)
     {
         var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
-        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context));
+        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context, name, note));
         var result = AtomicFileSaver.TrySave(document, bytes);
         if (!result.Succeeded)
         {
@@ -96,10 +103,10 @@ internal static partial class CoreBridge
     }
 
     /// <summary>Writes what saving would write to <c>&lt;plant&gt;.recovery</c>; the plant file is not touched.</summary>
-    public static string WriteRecovery(LoadedPlant loaded, double value, string verdict, SaveContext context)
+    public static string WriteRecovery(LoadedPlant loaded, double value, string? verdict, SaveContext context)
     {
         var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
-        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context));
+        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context, null, null));
         string target = SaveRecoveryEffect.RecoveryPathFor(document.Path);
         string temporary = target + ".tmp";
         File.WriteAllBytes(temporary, bytes);
@@ -146,16 +153,20 @@ internal static partial class CoreBridge
         }
     }
 
-    private static Core.Plants.OperatingPointRecord Record(LoadedPlant loaded, double value, string verdict, SaveContext context)
+    private static OperatingPointRecord Record(
+        LoadedPlant loaded, double value, string? verdict, SaveContext context, string? name, string? note)
     {
-        string name = loaded.Plant.Loop.Sweep;
+        string swept = loaded.Plant.Loop.Sweep;
+        verdict ??= loaded.Model is null
+            ? SpecWording.Verdict(PolesAt(loaded, value), Text.Glyphs.Ascii)
+            : SaveVerdict.Of(CheckBand(loaded, value));
         return new OperatingPointRecord(
-            $"{name} = {Text.NumberText.Exact(value)}",
+            string.IsNullOrWhiteSpace(name) ? $"{swept} = {Text.NumberText.Exact(value)}" : name,
             context.Now(),
             context.By,
-            [new KeyValuePair<string, double>(name, value)],
+            [new KeyValuePair<string, double>(swept, value)],
             verdict,
-            "saved from the workbench");
+            string.IsNullOrWhiteSpace(note) ? SaveOverlay.DefaultNote : note);
     }
 
     // The decay boundary is drawn at the strictest of the three decay-type limits; name the one that sets it.

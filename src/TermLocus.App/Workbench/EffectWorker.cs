@@ -14,6 +14,7 @@ public sealed class EffectWorker(SaveContext saveContext)
         LoadPlantEffect e => Load(e.Path),
         ScanLibraryEffect e => Scan(e.Folder),
         TraceLocusEffect e => Trace(e),
+        DesignEffect e => CoreBridge.Design(e.Loaded),
         CheckBandEffect e => CoreBridge.CheckBand(e.Loaded, e.SweptValue),
         SimulateResponseEffect e => CoreBridge.Simulate(e.Loaded, e.Values, e.Key),
         SaveOperatingPointEffect e => Save(e),
@@ -66,7 +67,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext);
+            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext, e.Name, e.Note);
             return new OperatingPointSaved(saved.Plant, saved, e.Value, e.QuitAfter);
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException)

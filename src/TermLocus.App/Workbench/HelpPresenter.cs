@@ -21,7 +21,7 @@ public static class HelpPresenter
 
     /// <summary>The scopes in the order help lists them.</summary>
     public static ImmutableArray<Scope> ScopeOrder { get; } =
-        [Scope.Main, Scope.PlanePane, Scope.PolesPane, Scope.Library, Scope.ValueEntry, Scope.QuitConfirm, Scope.Help, Scope.Everywhere];
+        [Scope.Main, Scope.PlanePane, Scope.PolesPane, Scope.Library, Scope.ValueEntry, Scope.SaveDialog, Scope.QuitConfirm, Scope.Help, Scope.Everywhere];
 
     /// <summary>The most lines help can have (at <see cref="MinimumWidth"/>); scrolling stops there.</summary>
     public static int LineCount { get; } = Lines(Glyphs.Unicode, MinimumWidth).Length;
@@ -57,6 +57,7 @@ public static class HelpPresenter
         Scope.PolesPane => "When the pole table has focus (Tab)",
         Scope.Library => "Plant library (o)",
         Scope.ValueEntry => "Value box (=): type a number such as 1.25 or 4.7e-3",
+        Scope.SaveDialog => "Save dialog (s): type the name, Tab, type the note",
         Scope.QuitConfirm => "Quit question (asked when the value is unsaved)",
         Scope.Help => "Help (?)",
         Scope.Everywhere => "Everywhere",

@@ -19,6 +19,12 @@ public static class KeyHints
             hints = hints.RemoveAll(h => h.Commands.Contains(Command.StepBandUp));
         }
 
+        if (state.Session is { Loaded.Model: null })
+        {
+            // A plant built without a loop model (tests, scripts) has no design to jump to.
+            hints = hints.RemoveAll(h => h.Commands.Contains(Command.JumpToRecommended));
+        }
+
         var texts = hints.Select(h => (h.Priority, Text: Render(h, scope, glyphs))).ToList();
         var kept = new HashSet<int>();
         int used = 0;
@@ -62,6 +68,12 @@ public static class KeyHints
             new([Command.Cancel], "cancel", 0),
             new([Command.DeleteBackward], "delete", 1),
         ]),
+        SaveOverlay => (Scope.SaveDialog,
+        [
+            new([Command.Confirm], "save", 0),
+            new([Command.NextPane], "next field", 1),
+            new([Command.Cancel], "cancel", 0),
+        ]),
         QuitConfirmOverlay => (Scope.QuitConfirm,
         [
             new([Command.SaveAndQuit], "save and quit", 0),
@@ -77,12 +89,13 @@ public static class KeyHints
         new([Command.StepBandUp, Command.StepBandDown], "band", 3),
         new([Command.FinerStep, Command.CoarserStep], "step size", 6),
         new([Command.EnterValue], "value", 3),
-        new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 5),
+        new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 6),
+        new([Command.JumpToRecommended], "design", 4),
         new([Command.ZoomIn, Command.ZoomOut], "zoom", 7),
         new([Command.FitView], "fit", 8),
-        new([Command.ToggleResponse], "response", 6),
+        new([Command.ToggleResponse], "response", 4),
         new([Command.NextPane], "pane", 9),
-        new([Command.OpenLibrary], "library", 4),
+        new([Command.OpenLibrary], "library", 5),
         new([Command.SaveOperatingPoint], "save", 3),
         new([Command.ShowHelp], "help", 0),
         new([Command.Quit], "quit", 1),

@@ -21,6 +21,7 @@ public static class KeyMap
         HelpOverlay => [Scope.Help, Scope.Everywhere],
         LibraryOverlay => [Scope.Library, Scope.Everywhere],
         ValueEntryOverlay => [Scope.ValueEntry, Scope.Everywhere],
+        SaveOverlay => [Scope.SaveDialog, Scope.Everywhere],
         QuitConfirmOverlay => [Scope.QuitConfirm, Scope.Everywhere],
         _ => [PaneScope(state.Focus), Scope.Main, Scope.Everywhere],
     };
@@ -87,6 +88,7 @@ public static class KeyMap
         Bind(Command.JumpToRangeStart, "go to the start of the range", S(SpecialKey.Home), K('g'));
         Bind(Command.JumpToRangeEnd, "go to the end of the range", S(SpecialKey.End), K('G'));
         Bind(Command.EnterValue, "type an exact value", K('='), S(SpecialKey.Enter));
+        Bind(Command.JumpToRecommended, "go to the recommended value (widest feasible interval)", K('d'));
         Bind(Command.JumpToPreviousBoundary, "previous spec boundary or crossing", K('p'), S(SpecialKey.PageUp));
         Bind(Command.JumpToNextBoundary, "next spec boundary or crossing", K('n'), S(SpecialKey.PageDown));
         Bind(Command.ZoomIn, "zoom in", K('z'));
@@ -123,6 +125,12 @@ public static class KeyMap
         bind(Scope.ValueEntry, Command.Confirm, "set the value", [S(SpecialKey.Enter)]);
         bind(Scope.ValueEntry, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
         bind(Scope.ValueEntry, Command.Cancel, "cancel", [S(SpecialKey.Escape)]);
+
+        bind(Scope.SaveDialog, Command.Confirm, "save with this name and note", [S(SpecialKey.Enter)]);
+        bind(Scope.SaveDialog, Command.NextPane, "next field", [S(SpecialKey.Tab), S(SpecialKey.Down)]);
+        bind(Scope.SaveDialog, Command.MoveUp, "previous field", [S(SpecialKey.Up)]);
+        bind(Scope.SaveDialog, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
+        bind(Scope.SaveDialog, Command.Cancel, "cancel, nothing is written", [S(SpecialKey.Escape)]);
 
         bind(Scope.QuitConfirm, Command.SaveAndQuit, "save, then quit", [K('s'), K('y')]);
         bind(Scope.QuitConfirm, Command.DiscardAndQuit, "quit without saving", [K('d'), K('n')]);

@@ -37,12 +37,59 @@ public static class OverlayPresenter
             var sweep = session.Sweep;
             string file = SafeText.Visible(Path.GetFileName(session.Loaded.Plant.Path));
             lines.Add($"{sweep.Name} = {NumberText.Exact(sweep.Value)} is not saved in {file}");
-            lines.Add($"(the file has {NumberText.Exact(sweep.SavedValue)}); it {SpecWording.Verdict(session.Poles, glyphs)}.");
+            lines.Add($"(the file has {NumberText.Exact(sweep.SavedValue)}); {VerdictWords(session, glyphs)}");
         }
 
         lines.Add(string.Empty);
         lines.Add(KeyHints.Line(state with { Overlay = new QuitConfirmOverlay() }, int.MaxValue, glyphs));
         return lines;
+    }
+
+    /// <summary>The save dialog: what is saved where, its band verdict, the name and note fields, the keys.</summary>
+    public static ImmutableArray<string> SaveDialog(WorkbenchState state, SaveOverlay dialog, int width, Glyphs glyphs)
+    {
+        var lines = new List<string>();
+        if (state.Session is { } session)
+        {
+            var sweep = session.Sweep;
+            string file = SafeText.Visible(Path.GetFileName(session.Loaded.Plant.Path));
+            lines.Add($"Save {sweep.Name} = {NumberText.Exact(sweep.Value)} into {file} as an operating point");
+            lines.AddRange(HelpPresenter.Wrap(VerdictWords(session, glyphs), Math.Max(1, width)).Take(2));
+        }
+
+        lines.Add(string.Empty);
+        lines.Add(Field("name", dialog.Name, !dialog.NoteField, width, glyphs));
+        lines.Add(Field("note", dialog.Note, dialog.NoteField, width, glyphs));
+        lines.Add(string.Empty);
+        lines.Add(KeyHints.Line(state with { Overlay = dialog }, width, glyphs));
+        return Fit(lines, width, glyphs);
+    }
+
+    // "▸ name: Kp = 3.2_": the field with the keys is marked and shows the cursor; a long text shows its end.
+    private static string Field(string label, string text, bool active, int width, Glyphs g)
+    {
+        string shown = SafeText.Visible(text) + (active ? "_" : string.Empty);
+        int room = Math.Max(4, width - label.Length - 4);
+        if (TextWidth.Of(shown) > room)
+        {
+            shown = g.Ellipsis + shown[^(room - 1)..];
+        }
+
+        return $"{(active ? g.Selected : " ")} {label}: {shown}";
+    }
+
+    // The band verdict the save would write, or that it is still being checked.
+    private static string VerdictWords(PlantSession session, Glyphs g)
+    {
+        var check = session.Check ?? session.Checks.Find(session.Sweep.Value);
+        if (session.Loaded.Model is null)
+        {
+            return "it " + SpecWording.Verdict(session.Poles, g) + ".";
+        }
+
+        return check is not null && check.SweptValue == session.Sweep.Value
+            ? "band: " + SaveVerdict.Of(check, g)
+            : "band: still being checked" + g.Ellipsis;
     }
 
     /// <summary>The whole screen when the terminal is below the minimum size; q (and the quit question) still work.</summary>

@@ -34,6 +34,8 @@ internal static class Overlays
             case LibraryOverlay library:
                 int items = s.Library.Items.Length;
                 return Update.Done(s with { Overlay = new LibraryOverlay(Math.Clamp(library.Selected + direction, 0, Math.Max(0, items - 1))) });
+            case SaveOverlay dialog:
+                return Update.Done(s with { Overlay = dialog with { NoteField = !dialog.NoteField } });
             case NoOverlay when s.Focus == Pane.Poles && s.Session is { } session:
                 int rows = PoleRows.Group(session.Poles.Poles, session.Poles.Plane).Length;
                 int selected = Math.Clamp(session.SelectedPole + direction, 0, Math.Max(0, rows - 1));
@@ -43,13 +45,22 @@ internal static class Overlays
         }
     }
 
-    public static (WorkbenchState, ImmutableArray<Effect>) DeleteBackward(WorkbenchState s) =>
-        s.Overlay is ValueEntryOverlay entry && entry.Text.Length > 0
-            ? Update.Done(s with { Overlay = new ValueEntryOverlay(entry.Text[..^1], null) })
-            : Update.Done(s);
+    public static (WorkbenchState, ImmutableArray<Effect>) DeleteBackward(WorkbenchState s) => s.Overlay switch
+    {
+        ValueEntryOverlay entry when entry.Text.Length > 0 => Update.Done(s with { Overlay = new ValueEntryOverlay(entry.Text[..^1], null) }),
+        SaveOverlay dialog when dialog.Field.Length > 0 => Update.Done(s with { Overlay = dialog.WithField(dialog.Field[..^1]) }),
+        _ => Update.Done(s),
+    };
 
     public static (WorkbenchState, ImmutableArray<Effect>) Type(WorkbenchState s, char character)
     {
+        if (s.Overlay is SaveOverlay dialog)
+        {
+            return char.IsControl(character) || dialog.Field.Length >= SaveOverlay.MaxLength
+                ? Update.Done(s)
+                : Update.Done(s with { Overlay = dialog.WithField(dialog.Field + character) });
+        }
+
         if (s.Overlay is not ValueEntryOverlay entry || char.IsControl(character) || entry.Text.Length >= MaxValueLength)
         {
             return Update.Done(s);
@@ -65,6 +76,7 @@ internal static class Overlays
     {
         ValueEntryOverlay entry => ConfirmValue(s, entry),
         LibraryOverlay library => OpenSelected(s, library),
+        SaveOverlay dialog => Saving.Save(s with { Overlay = Overlay.None }, quitAfter: false, dialog.Name, dialog.Note),
         _ => Update.Done(s),
     };
 

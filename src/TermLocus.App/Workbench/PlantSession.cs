@@ -43,6 +43,9 @@ public sealed record PlantSession(
     /// <summary>The inputs of the last step response asked for.</summary>
     public ResponseKey? RequestedResponse { get; init; }
 
+    /// <summary>The robust design of the swept value, or null while it is being made.</summary>
+    public Designed? Design { get; init; }
+
     /// <summary>The inputs of the step response for the values shown.</summary>
     public ResponseKey ResponseKey => new(Loop.Key, Sweep.Value);
 

@@ -7,6 +7,10 @@ namespace TermLocus.App.Workbench;
 /// </summary>
 /// <param name="Loaded">The plant as read (with the file's bytes and hash).</param>
 /// <param name="Value">The swept value to save.</param>
-/// <param name="Verdict">One line saying how the value fares against the specs.</param>
+/// <param name="Verdict">One line saying how the value fares against the specs across the band, or null to have the
+/// save run the band check itself.</param>
 /// <param name="QuitAfter">Quit once saved (the answer to the quit question).</param>
-public sealed record SaveOperatingPointEffect(LoadedPlant Loaded, double Value, string Verdict, bool QuitAfter) : Effect;
+/// <param name="Name">The operating point's name, or null for "name = value".</param>
+/// <param name="Note">Its note, or null for the default note.</param>
+public sealed record SaveOperatingPointEffect(
+    LoadedPlant Loaded, double Value, string? Verdict, bool QuitAfter, string? Name = null, string? Note = null) : Effect;

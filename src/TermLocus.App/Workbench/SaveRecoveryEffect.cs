@@ -6,8 +6,9 @@ namespace TermLocus.App.Workbench;
 /// </summary>
 /// <param name="Loaded">The plant as read (with the file's bytes).</param>
 /// <param name="Value">The unsaved swept value.</param>
-/// <param name="Verdict">One line saying how the value fares against the specs.</param>
-public sealed record SaveRecoveryEffect(LoadedPlant Loaded, double Value, string Verdict) : Effect
+/// <param name="Verdict">One line saying how the value fares against the specs across the band, or null to have
+/// the band checked while writing.</param>
+public sealed record SaveRecoveryEffect(LoadedPlant Loaded, double Value, string? Verdict) : Effect
 {
     /// <summary>The recovery file for <paramref name="plantPath"/>.</summary>
     public static string RecoveryPathFor(string plantPath) => plantPath + ".recovery";

@@ -6,7 +6,26 @@ namespace TermLocus.App.Workbench;
 /// <summary>Saving the chosen value and the ways out: quit, quit after a question, quit at once.</summary>
 internal static class Saving
 {
-    public static (WorkbenchState, ImmutableArray<Effect>) Save(WorkbenchState s, bool quitAfter)
+    /// <summary>Opens the save dialog with the default name and note, unless there is nothing to save.</summary>
+    public static (WorkbenchState, ImmutableArray<Effect>) OpenDialog(WorkbenchState s)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        if (!session.Unsaved)
+        {
+            return NothingToSave(s, session.Sweep);
+        }
+
+        return Update.Done(s with { Overlay = new SaveOverlay(DefaultName(session.Sweep), SaveOverlay.DefaultNote, NoteField: false) });
+    }
+
+    /// <summary>"Kp = 3.2": the name an operating point gets when none is typed.</summary>
+    public static string DefaultName(SweepState sweep) => $"{sweep.Name} = {NumberText.Exact(sweep.Value)}";
+
+    public static (WorkbenchState, ImmutableArray<Effect>) Save(WorkbenchState s, bool quitAfter, string? name = null, string? note = null)
     {
         if (s.Session is not { } session)
         {
@@ -17,14 +36,13 @@ internal static class Saving
         if (!session.Unsaved)
         {
             // Nothing changed: skip the write, leave the file's bytes alone.
-            return quitAfter
-                ? (s, [new QuitEffect()])
-                : Update.Say(s, StatusMessage.Info($"nothing to save: {sweep.Name} = {NumberText.Exact(sweep.Value)} is the value in the file"));
+            return quitAfter ? (s, [new QuitEffect()]) : NothingToSave(s, sweep);
         }
 
-        string verdict = SpecWording.Verdict(session.Poles, Glyphs.Unicode);
+        string chosenName = string.IsNullOrWhiteSpace(name) ? DefaultName(sweep) : name.Trim();
+        string chosenNote = string.IsNullOrWhiteSpace(note) ? SaveOverlay.DefaultNote : note.Trim();
         return (s with { Message = StatusMessage.Info($"saving {sweep.Name} = {NumberText.Exact(sweep.Value)}") },
-            [new SaveOperatingPointEffect(session.Loaded, sweep.Value, verdict, quitAfter)]);
+            [new SaveOperatingPointEffect(session.Loaded, sweep.Value, Verdict(session), quitAfter, chosenName, chosenNote)]);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Quit(WorkbenchState s) =>
@@ -34,10 +52,28 @@ internal static class Saving
     {
         if (s.Session is { Unsaved: true } session)
         {
-            string verdict = SpecWording.Verdict(session.Poles, Glyphs.Unicode);
-            return (s, [new SaveRecoveryEffect(session.Loaded, session.Sweep.Value, verdict), new QuitEffect()]);
+            return (s, [new SaveRecoveryEffect(session.Loaded, session.Sweep.Value, Verdict(session)), new QuitEffect()]);
         }
 
         return (s, [new QuitEffect()]);
     }
+
+    /// <summary>
+    /// The verdict saved with the value: the band-wide one (as <c>termlocus check</c> words it, ASCII symbols) when the
+    /// band check for the value is at hand; null when it is not, so the save computes it; the poles' own verdict for
+    /// a plant without a loop model.
+    /// </summary>
+    public static string? Verdict(PlantSession session)
+    {
+        if (session.Loaded.Model is null)
+        {
+            return SpecWording.Verdict(session.Poles, Glyphs.Ascii);
+        }
+
+        var check = session.Check ?? session.Checks.Find(session.Sweep.Value);
+        return check is { Result: not null } && check.SweptValue == session.Sweep.Value ? SaveVerdict.Of(check) : null;
+    }
+
+    private static (WorkbenchState, ImmutableArray<Effect>) NothingToSave(WorkbenchState s, SweepState sweep) =>
+        Update.Say(s, StatusMessage.Info($"nothing to save: {sweep.Name} = {NumberText.Exact(sweep.Value)} is the value in the file"));
 }

@@ -27,6 +27,9 @@ public enum Scope
     /// <summary>The value-entry box.</summary>
     ValueEntry,
 
+    /// <summary>The save dialog (name and note of the operating point).</summary>
+    SaveDialog,
+
     /// <summary>The question asked before quitting with an unsaved value.</summary>
     QuitConfirm,
 }

@@ -90,6 +90,41 @@ internal static class Sweeping
             $"{SpecWording.DescribeMark(mark)} at {session.Sweep.Name} = {NumberText.Short(mark.Value)}"));
     }
 
+    public static (WorkbenchState, ImmutableArray<Effect>) ToRecommended(WorkbenchState s)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var sweep = session.Sweep;
+        switch (session.Design)
+        {
+            case null when session.Loaded.Model is null:
+                return Update.Say(s, StatusMessage.Warning("no design for a plant without a loop model"));
+            case null:
+                return Update.Say(s, StatusMessage.Info("the feasible intervals are still being worked out; try again in a moment"));
+            case { Result: null, Problem: var problem }:
+                return Update.Say(s, StatusMessage.Error("no design: " + SafeText.Visible(problem ?? "unknown")));
+            case { Result.Recommended: null } design:
+                return Update.Say(s, StatusMessage.Warning(
+                    $"no {sweep.Name} in {NumberText.Short(design.Result.Span.Low, 6)}..{NumberText.Short(design.Result.Span.High, 6)} " +
+                    "meets every spec at nominal and at every band corner"));
+        }
+
+        var result = session.Design.Result!;
+        double best = result.Recommended!.Value;
+        double value = StepSeries.Round(best, sweep.Step / 10);
+        var interval = result.Intervals.FirstOrDefault(i => i.From <= best && best <= i.To) ?? result.Widest!;
+        bool lowNearer = best - interval.From <= interval.To - best;
+        double end = lowNearer ? interval.From : interval.To;
+        var keys = lowNearer ? interval.FromLimitedBy : interval.ToLimitedBy;
+        string limit = keys.IsEmpty ? "end of the range" : string.Join(" and ", keys.Select(SafeText.Visible));
+        return SetValue(s, value, StatusMessage.Info(
+            $"recommended {sweep.Name} = {NumberText.Exact(value)} in {NumberText.Short(interval.From, 4)}..{NumberText.Short(interval.To, 4)}; " +
+            $"nearest end {NumberText.Short(end, 4)}: {limit}"));
+    }
+
     public static (WorkbenchState, ImmutableArray<Effect>) Revert(WorkbenchState s)
     {
         if (s.Session is not { } session)

@@ -70,6 +70,11 @@ internal static class PaneContent
             .Select(l => new StyledLine(l, l.StartsWith(g.Violated, StringComparison.Ordinal) ? Tone.Bad : Tone.Normal))
             .ToList();
 
+    public static IReadOnlyList<StyledLine> SaveDialog(WorkbenchState state, SaveOverlay dialog, int width, Glyphs g) =>
+        OverlayPresenter.SaveDialog(state, dialog, width, g)
+            .Select(l => new StyledLine(l, l.StartsWith(g.Selected, StringComparison.Ordinal) ? Tone.Heading : Tone.Normal))
+            .ToList();
+
     public static IReadOnlyList<StyledLine> QuitConfirm(WorkbenchState state, int width, Glyphs g) =>
         OverlayPresenter.QuitConfirm(state, width, g).Select(l => new StyledLine(l, Tone.Normal)).ToList();
 

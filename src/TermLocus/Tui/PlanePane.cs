@@ -19,9 +19,12 @@ internal sealed class PlanePane : View
     private readonly Palette palette;
     private readonly CanvasSymbols symbols;
     private readonly FrameGlyphs frame;
+    private readonly Glyphs glyphs;
     private string heading = string.Empty;
     private RenderedPlane? last;
-    private (int Width, int Height, bool Legend, string Heading) lastFrame;
+    private string? lastBar;
+    private (int Width, int Height, bool Legend, bool Bar) lastFrame;
+    private string lastHeading = string.Empty;
 
     public PlanePane(Func<WorkbenchState> state, Action<Message> deliver, Palette palette, CanvasSymbols symbols, FrameGlyphs frame)
     {
@@ -30,6 +33,7 @@ internal sealed class PlanePane : View
         this.palette = palette;
         this.symbols = symbols;
         this.frame = frame;
+        glyphs = symbols == CanvasSymbols.Braille ? Glyphs.Unicode : Glyphs.Ascii;
         CanFocus = false;
     }
 
@@ -55,7 +59,10 @@ internal sealed class PlanePane : View
 
     private int PlotColumns => Math.Max(0, Viewport.Width - 2);
 
-    private int PlotRows => Math.Max(0, Viewport.Height - 2 - (ShowsLegend ? 1 : 0));
+    private int PlotRows => Math.Max(0, Viewport.Height - 2 - (ShowsLegend ? 1 : 0) - (ShowsDesignBar ? 1 : 0));
+
+    // The feasible-interval bar sits under the plot whenever the plant has a loop model to design with.
+    private bool ShowsDesignBar => state().Session?.Loaded.Model is not null;
 
     /// <summary>Forget what is on screen: the next draw writes every cell (after something drew over the pane).</summary>
     public void Invalidate() => last = null;
@@ -73,12 +80,29 @@ internal sealed class PlanePane : View
         }
 
         DrawCount++;
-        var currentFrame = (Viewport.Width, Viewport.Height, ShowsLegend, heading);
+        var currentFrame = (Viewport.Width, Viewport.Height, ShowsLegend, ShowsDesignBar);
         bool full = last is null || last.Columns != columns || last.Rows != rows || lastFrame != currentFrame;
         if (full)
         {
             DrawFrame(columns, rows);
         }
+        else if (heading != lastHeading)
+        {
+            // "tracing…" comes and goes with each trace: only the top edge changes, not the plot.
+            SetAttribute(palette.For(Tone.Normal));
+            AddStr(0, 0, frame.Top(heading, Viewport.Width));
+        }
+
+        lastHeading = heading;
+
+        string? bar = DesignBarPresenter.Line(state().Session, columns, glyphs);
+        if (bar is not null && (full || bar != lastBar))
+        {
+            SetAttribute(palette.For(Tone.Normal));
+            AddStr(1, rows + 1, bar);
+        }
+
+        lastBar = bar;
 
         var plane = PlanePresenter.Render(state(), columns, rows, symbols);
         for (int row = 0; row < rows; row++)
@@ -165,7 +189,7 @@ internal sealed class PlanePane : View
         if (ShowsLegend)
         {
             SetAttribute(palette.For(Tone.Dim));
-            AddStr(1, rows + 1, TextWidth.PadRight(PlaneLegend.Line(symbols, columns), columns));
+            AddStr(1, rows + 1 + (ShowsDesignBar ? 1 : 0), TextWidth.PadRight(PlaneLegend.Line(symbols, columns), columns));
         }
     }
 }

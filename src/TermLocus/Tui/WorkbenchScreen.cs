@@ -139,6 +139,7 @@ internal sealed class WorkbenchScreen : Runnable
             HelpOverlay => layout.OverlayBox(86, screen.Height),
             LibraryOverlay => layout.OverlayBox(100, state.Library.Items.Length + 4),
             ValueEntryOverlay => layout.OverlayBox(52, 7),
+            SaveOverlay => layout.OverlayBox(76, 10),
             QuitConfirmOverlay => layout.OverlayBox(72, 6),
             _ => Box.Empty,
         };
@@ -150,6 +151,7 @@ internal sealed class WorkbenchScreen : Runnable
         HelpOverlay help => PaneContent.Help(help, width, height, glyphs),
         LibraryOverlay open => PaneContent.Library(State, open.Selected, width, height, glyphs),
         ValueEntryOverlay entry => PaneContent.ValueEntry(State, entry, width, glyphs),
+        SaveOverlay dialog => PaneContent.SaveDialog(State, dialog, width, glyphs),
         QuitConfirmOverlay => PaneContent.QuitConfirm(State, width, glyphs),
         _ => [],
     };
@@ -202,7 +204,7 @@ internal sealed class WorkbenchScreen : Runnable
     }
 
     private static object PlaneInputs(WorkbenchState s) =>
-        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.Session?.Band, s.Session?.CurrentLoop, s.View, s.Focus,
+        (s.Session?.Loaded, s.Session?.Locus, s.Session?.Poles, s.Session?.Band, s.Session?.CurrentLoop, s.Session?.Design, s.View, s.Focus,
             s.Session?.SelectedPole, s.Overlay is NoOverlay);
 
     private static object ResponseInputs(WorkbenchState s) =>
@@ -222,13 +224,17 @@ internal sealed class WorkbenchScreen : Runnable
         plane.Heading = (state.Focus == Pane.Plane ? mark : string.Empty) + name + zoom + tracing;
         poles.Heading = (state.Focus == Pane.Poles ? mark : string.Empty) + "closed-loop poles";
         string simulating = state.Session is { ResponseIsCurrent: false } ? "  simulating" + glyphs.Ellipsis : string.Empty;
-        response.Heading = "step response" + (state.Session is { } session
-            ? $" at {session.Sweep.Name} = {NumberText.Short(session.Sweep.Value)}" : string.Empty) + simulating;
+        string at = state.Session is { } session
+            ? $" at {session.Sweep.Name} = {NumberText.Short(session.Sweep.Value)}"
+              + (session.Varied.IsNominal ? string.Empty : ", " + StatusLinePresenter.VariedWords(session.Varied))
+            : string.Empty;
+        response.Heading = "step response" + at + simulating;
         overlay.Heading = state.Overlay switch
         {
             HelpOverlay => "help (Esc closes)",
             LibraryOverlay => "plant library",
             ValueEntryOverlay => "type a value",
+            SaveOverlay => "save the operating point",
             QuitConfirmOverlay => "quit?",
             _ => string.Empty,
         };

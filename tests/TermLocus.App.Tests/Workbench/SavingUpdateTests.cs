@@ -36,13 +36,86 @@ public class SavingUpdateTests
     }
 
     [Fact]
-    public void Save_writes_the_value_with_its_verdict()
+    public void S_asks_for_a_name_and_a_note_with_defaults_before_writing()
     {
-        var (state, effects) = Update.Apply(Unsaved(), Command.SaveOperatingPoint);
-        var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(effects));
+        var (dialog, effects) = Update.Apply(Unsaved(), Command.SaveOperatingPoint);
+        Assert.Empty(effects);
+        Assert.Equal(new SaveOverlay("K = 5.2", "saved from the workbench", NoteField: false), dialog.Overlay);
+        var (state, saving) = Update.Apply(dialog, Command.Confirm);
+        var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(saving));
         Assert.False(save.QuitAfter);
-        Assert.Equal("meets every spec at the nominal values", save.Verdict);
+        Assert.Equal("K = 5.2", save.Name);
+        Assert.Equal("saved from the workbench", save.Note);
+        Assert.Equal("meets every spec at the nominal values", save.Verdict); // no loop model: the poles' own verdict
+        Assert.Equal(Overlay.None, state.Overlay);
         Assert.Equal("saving K = 5.2", state.Message!.Text);
+    }
+
+    [Fact]
+    public void Typing_replaces_the_defaults_and_tab_moves_to_the_note()
+    {
+        var dialog = Update.Apply(Unsaved(), Command.SaveOperatingPoint).State;
+        for (int i = 0; i < "K = 5.2".Length; i++)
+        {
+            dialog = Update.Apply(dialog, Command.DeleteBackward).State;
+        }
+
+        dialog = Type(dialog, "bench 3");
+        dialog = Update.Apply(dialog, Command.NextPane).State;
+        Assert.True(((SaveOverlay)dialog.Overlay).NoteField);
+        dialog = Type(dialog, "; oil at 40 C");
+        var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(Update.Apply(dialog, Command.Confirm).Effects));
+        Assert.Equal("bench 3", save.Name);
+        Assert.Equal("saved from the workbench; oil at 40 C", save.Note);
+    }
+
+    [Fact]
+    public void Escape_closes_the_dialog_and_writes_nothing()
+    {
+        var dialog = Update.Apply(Unsaved(), Command.SaveOperatingPoint).State;
+        var (state, effects) = Update.Apply(dialog, Command.Cancel);
+        Assert.Empty(effects);
+        Assert.Equal(Overlay.None, state.Overlay);
+        Assert.True(state.Unsaved);
+    }
+
+    [Fact]
+    public void Keys_of_the_main_screen_are_text_in_the_dialog()
+    {
+        var dialog = Update.Apply(Unsaved(), Command.SaveOperatingPoint).State;
+        Assert.Null(KeyMap.Lookup(dialog, KeyChord.Of('q')));
+        Assert.Null(KeyMap.Lookup(dialog, KeyChord.Of('s')));
+        Assert.Equal(Command.NextPane, KeyMap.Lookup(dialog, KeyChord.Of(SpecialKey.Tab)));
+        Assert.Equal("K = 5.2q", ((SaveOverlay)Type(dialog, "q").Overlay).Name);
+    }
+
+    [Fact]
+    public void The_saved_verdict_is_the_band_wide_one_in_ascii()
+    {
+        // K/(s(s+a)) at K = 5.2 misses ζ ≥ 0.4 at a = 1.6 (ζ = 0.8/√5.2 = 0.3508 at -0.8 ± j√4.56); check's own wording, no prefix.
+        var state = BandPlants.Apply(BandPlants.Opened(BandPlants.Quadratic()), Command.StepSweepUp);
+        var dialog = Update.Apply(state, Command.SaveOperatingPoint).State;
+        var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(Update.Apply(dialog, Command.Confirm).Effects));
+        Assert.StartsWith("FAIL ! min_damping: zeta 0.3508 < 0.4 at -0.8000 +/- j2.135 (with a -20 %", save.Verdict, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_save_asked_before_the_band_check_is_back_leaves_the_verdict_to_the_save()
+    {
+        var (state, _) = Update.Apply(BandPlants.Opened(BandPlants.Quadratic()), Command.StepSweepUp);
+        var dialog = Update.Apply(state, Command.SaveOperatingPoint).State;
+        var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(Update.Apply(dialog, Command.Confirm).Effects));
+        Assert.Null(save.Verdict);
+    }
+
+    private static WorkbenchState Type(WorkbenchState state, string text)
+    {
+        foreach (char c in text)
+        {
+            state = Update.Receive(state, new CharacterTyped(c)).State;
+        }
+
+        return state;
     }
 
     [Fact]

@@ -17,7 +17,7 @@ public class StatusLinePresenterTests
             [
                 Pad("✓ all specs met at K = 5"),
                 Pad(string.Empty),
-                Pad("←/→ step  = value  p/n boundary  t response  o library  s save  ? help  q quit"),
+                Pad("←/→ step  [/] step size  = value  t response  o library  s save  ? help  q quit"),
             ],
             lines.ToArray());
     }

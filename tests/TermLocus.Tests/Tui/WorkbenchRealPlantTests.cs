@@ -52,7 +52,16 @@ public sealed class WorkbenchRealPlantTests : IDisposable
         string before = File.ReadAllText(path);
         using var h = ScreenHarness.OnFolder(80, 24, folder, path);
         h.Press(Key.CursorRight, Key.CursorRight, new Key('s'));
+        Snapshot.Match("real-conveyor-save-dialog-80x24", h.Screen());
+        Assert.Equal(before, File.ReadAllText(path)); // the dialog writes nothing yet
+        h.Type(" bench 3");
+        h.Press(Key.Tab);
+        h.Type("; full belt");
+        h.Press(Key.Enter);
         string after = File.ReadAllText(path);
+        Assert.Contains("name = \"Kp = 8 bench 3\"", after, StringComparison.Ordinal);
+        Assert.Contains("note = \"saved from the workbench; full belt\"", after, StringComparison.Ordinal);
+        Assert.Contains("verdict = \"pass ok every spec met across the band; least margin", after, StringComparison.Ordinal);
         Assert.NotEqual(before, after);
         Assert.Contains("value = 8.0", after, StringComparison.Ordinal);
         Assert.Contains("[[operating_points]]", after, StringComparison.Ordinal);

@@ -1,0 +1,90 @@
+using TermLocus.App.Text;
+using TermLocus.App.Workbench;
+
+namespace TermLocus.App.Tests.Workbench;
+
+public class DesignUpdateTests
+{
+    // K/(s(s+a)), a in [1.6, 2.4], ζ ≥ 0.4: ζ = a/(2√K) for K > a²/4 (else real poles, ζ = 1), lowest at a = 1.6, so
+    // every corner meets the limit exactly for K ≤ (0.8/0.4)² = 4 (closed form, see BandPlants.Quadratic).
+    private static WorkbenchState Designed()
+    {
+        var opened = BandPlants.Opened(BandPlants.Quadratic());
+        return Update.Receive(opened, CoreBridge.Design(opened.Session!.Loaded)).State;
+    }
+
+    [Fact]
+    public void Opening_a_plant_asks_for_its_design()
+    {
+        var (start, _) = Update.Start(null, TestPlants.Folder);
+        var (_, effects) = Update.Receive(start, new PlantLoaded(BandPlants.Quadratic()));
+        Assert.Contains(effects, e => e is DesignEffect);
+    }
+
+    [Fact]
+    public void The_feasible_interval_ends_where_the_worst_corner_reaches_the_damping_limit()
+    {
+        var result = Designed().Session!.Design!.Result!;
+        var interval = Assert.Single(result.Intervals);
+        Assert.Equal(4.0, interval.To, 1e-6);
+        Assert.Contains("min_damping", interval.ToLimitedBy);
+        Assert.InRange(result.Recommended!.Value, interval.From, interval.To);
+    }
+
+    [Fact]
+    public void D_jumps_to_the_recommended_value_and_names_the_limit_at_the_nearest_end()
+    {
+        var state = Designed();
+        var (after, _) = Update.Apply(state, Command.JumpToRecommended);
+        double recommended = state.Session!.Design!.Result!.Recommended!.Value;
+        Assert.Equal(StepSeries.Round(recommended, 0.02), after.Session!.Sweep.Value);
+        Assert.StartsWith($"recommended K = {NumberText.Exact(after.Session.Sweep.Value)} in ", after.Message!.Text, StringComparison.Ordinal);
+        Assert.Contains("nearest end", after.Message.Text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void D_before_the_design_is_back_says_so_and_leaves_the_value()
+    {
+        var (start, _) = Update.Start(null, TestPlants.Folder);
+        var opened = Update.Receive(start, new PlantLoaded(BandPlants.Quadratic())).State;
+        var (state, _) = Update.Apply(opened, Command.JumpToRecommended);
+        Assert.Equal(5.0, state.Session!.Sweep.Value);
+        Assert.StartsWith("the feasible intervals are still being worked out", state.Message!.Text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_bar_shows_the_feasible_cells_the_value_and_the_numbers()
+    {
+        // Span [0, 20] in 20 cells of 1: cells 0 to 3 feasible (K ≤ 4), the value K = 5 in cell 5.
+        var session = Designed().Session!;
+        string line = DesignBarPresenter.Line(session, 60, Glyphs.Ascii)!;
+        string rec = NumberText.Short(session.Design!.Result!.Recommended!.Value, 4);
+        Assert.Equal(60, line.Length);
+        Assert.StartsWith("feasible K [", line, StringComparison.Ordinal);
+        int open = line.IndexOf('[', StringComparison.Ordinal), close = line.IndexOf(']', StringComparison.Ordinal);
+        string bar = line[(open + 1)..close];
+        int cells = bar.Length;
+        int valueCell = (int)(5.0 / 20 * cells);
+        Assert.Equal('#', bar[valueCell]);
+        for (int i = 0; i < cells; i++)
+        {
+            double low = 20.0 * i / cells, high = 20.0 * (i + 1) / cells;
+            if (high <= 4 && bar[i] != '|')
+            {
+                Assert.Equal('=', bar[i]);
+            }
+            else if (low >= 4 && i != valueCell)
+            {
+                Assert.Equal('-', bar[i]);
+            }
+        }
+
+        Assert.EndsWith($"..4 d {rec}", line.TrimEnd(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Without_a_loop_model_there_is_no_bar()
+    {
+        Assert.Null(DesignBarPresenter.Line(TestPlants.Opened().Session, 60, Glyphs.Ascii));
+    }
+}
