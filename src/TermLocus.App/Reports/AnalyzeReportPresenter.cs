@@ -17,11 +17,12 @@ public static class AnalyzeReportPresenter
         var lines = ImmutableArray.CreateBuilder<string>();
         var facts = study.Facts;
         string p = SafeText.Visible(plant.Loop.Sweep);
+        string v = study.Plane.VariableName;
         lines.Add(SafeText.Fit($"{SafeText.Visible(file)}  {SafeText.Visible(plant.Title)}", CheckReportPresenter.Width));
         lines.Add($"  sweep: {p} from {Num(study.Span.Low)} to {Num(study.Span.High)}"
             + (study.Plane.IsSampled ? $"   z-plane, sample time {Num(study.Plane.SampleTimeSeconds!.Value)} s" : "   s-plane"));
         lines.Add(facts.IsAffine
-            ? $"  affine in {p}: P(s) = A(s) + {p}·B(s); the classic rules apply to the loop {p}·B/A"
+            ? $"  affine in {p}: P({v}) = A({v}) + {p}·B({v}); the classic rules apply to the loop {p}·B/A"
             : $"  not affine in {p}: asymptotes, break points and angles do not apply; crossings found numerically");
         if (facts.IsAffine)
         {

@@ -38,7 +38,7 @@ public static class SampledSpecBoundaries
         {
             foreach (var (end, meetsAfter) in new[] { (low, true), (high, false) })
             {
-                if (end > from && end < to)
+                if (UnitCircleStability.IsInside(end, from, to))
                 {
                     var roots = PolynomialRoots.Find(family.At(end));
                     var pole = WorstMargin(family, plane, end, margin).Root;

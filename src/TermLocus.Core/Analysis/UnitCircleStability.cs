@@ -33,7 +33,7 @@ public static class UnitCircleStability
         {
             foreach (double end in new[] { interval.From, interval.To })
             {
-                if (end > from && end < to)
+                if (IsInside(end, from, to))
                 {
                     var z = PolynomialRoots.Find(family.At(end)).MaxBy(Complex.Abs);
                     result.Add((end, Math.Abs(z.Phase)));
@@ -42,6 +42,17 @@ public static class UnitCircleStability
         }
 
         return result.ToImmutable();
+    }
+
+    /// <summary>
+    /// True when <paramref name="value"/> lies inside the span by more than a millionth of its width: an interval
+    /// end closer to a span end is the span end itself (a root sitting on the circle there, such as an integrator's
+    /// z = 1 at a zero gain), not a crossing.
+    /// </summary>
+    internal static bool IsInside(double value, double from, double to)
+    {
+        double margin = 1e-6 * (to - from);
+        return value > from + margin && value < to - margin;
     }
 
     // Positive when every root is strictly inside the unit circle.
