@@ -55,7 +55,7 @@ public class StepFiguresTests
     }
 
     [Fact]
-    public void Negative_dc_gain_gives_the_same_figures_as_a_positive_one()
+    public void Negative_steady_state_gain_gives_the_same_figures_as_a_positive_one()
     {
         var negative = new RationalFunction(Polynomial.Constant(-3.0), Polynomial.FromAscending(1.0, 0.2));
         var trace = StepResponse.Simulate(negative, 2.0, 20001);
