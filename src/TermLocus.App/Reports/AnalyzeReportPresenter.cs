@@ -66,23 +66,12 @@ public static class AnalyzeReportPresenter
                 SpecBoundaryKind.MinDecayRate => $"{g.DecayRate} {Num(s.Limit)} 1/s",
                 _ => $"{g.NaturalFrequency} {Num(s.Limit)} rad/s",
             };
-            lines.Add($"  {KeyOf(s.Spec, plant.Specs)} boundary ({limit}) at {p} = {Num(s.Value)}, {turn}, pole {SpecWording.Location(s.Pole, g)}");
+            lines.Add($"  {s.Spec.Key(plant.Specs)} boundary ({limit}) at {p} = {Num(s.Value)}, {turn}, pole {SpecWording.Location(s.Pole, g)}");
         }
 
         return lines.ToImmutable();
     }
 
-    /// <summary>The plant-file key of a boundary's limit (the decay line is set by the strictest decay-type key).</summary>
-    public static string KeyOf(SpecBoundaryKind kind, Specs specs) => kind switch
-    {
-        SpecBoundaryKind.MinDamping => SpecKind.MinDamping.Key(),
-        SpecBoundaryKind.MinNaturalFrequency => SpecKind.MinNaturalFrequency.Key(),
-        SpecBoundaryKind.MaxNaturalFrequency => SpecKind.MaxNaturalFrequency.Key(),
-        SpecBoundaryKind.MinDecayRate => SpecCheck.Limits(specs)
-            .Where(l => l.Spec is SpecKind.MinDecayRate or SpecKind.MaxTimeToHalf or SpecKind.MaxSettlingTime)
-            .MaxBy(l => SpecCheck.EquivalentDecayRate(l.Spec, l.Limit)).Spec.Key(),
-        _ => kind.ToString(),
-    };
 
     private static void AddAngles(ImmutableArray<string>.Builder lines, string word, ImmutableArray<AngleConditionDirection> angles, Glyphs g)
     {

@@ -71,7 +71,7 @@ internal static partial class CoreBridge
     {
         var specs = loaded.Plant.Specs;
         var study = LocusStudy.Run(family ?? loaded.Family, loaded.Plane, loaded.Range, specs);
-        var marks = study.SpecBoundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, KeyOf(b.Spec, specs)))
+        var marks = study.SpecBoundaries.Select(b => new SweepMark(b.Value, SweepMarkKind.SpecBoundary, b.Spec.Key(specs)))
             .Concat(study.Facts.AxisCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
             .Concat(study.UnitCircleCrossings.Select(c => new SweepMark(c.Value, SweepMarkKind.StabilityCrossing, null)))
             .Concat(study.Facts.BreakPoints.Select(b => new SweepMark(b.Value, SweepMarkKind.BreakPoint, null)))
@@ -168,16 +168,4 @@ internal static partial class CoreBridge
             verdict,
             string.IsNullOrWhiteSpace(note) ? SaveOverlay.DefaultNote : note);
     }
-
-    // The decay boundary is drawn at the strictest of the three decay-type limits; name the one that sets it.
-    private static string KeyOf(SpecBoundaryKind kind, Specs specs) => kind switch
-    {
-        SpecBoundaryKind.MinDamping => SpecKind.MinDamping.Key(),
-        SpecBoundaryKind.MinNaturalFrequency => SpecKind.MinNaturalFrequency.Key(),
-        SpecBoundaryKind.MaxNaturalFrequency => SpecKind.MaxNaturalFrequency.Key(),
-        SpecBoundaryKind.MinDecayRate => SpecCheck.Limits(specs)
-            .Where(l => l.Spec is SpecKind.MinDecayRate or SpecKind.MaxTimeToHalf or SpecKind.MaxSettlingTime)
-            .MaxBy(l => SpecCheck.EquivalentDecayRate(l.Spec, l.Limit)).Spec.Key(),
-        _ => kind.ToString(),
-    };
 }

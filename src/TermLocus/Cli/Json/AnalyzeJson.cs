@@ -1,6 +1,5 @@
 using System.Numerics;
 using System.Text.Json;
-using TermLocus.App.Reports;
 using TermLocus.Core.Analysis;
 
 namespace TermLocus.Cli.Json;
@@ -160,7 +159,7 @@ internal static class AnalyzeJson
         foreach (var s in study.SpecBoundaries)
         {
             w.WriteStartObject();
-            w.WriteString("spec", AnalyzeReportPresenter.KeyOf(s.Spec, input.Plant.Specs));
+            w.WriteString("spec", s.Spec.Key(input.Plant.Specs));
             JsonOutput.Number(w, "limit", s.Limit);
             JsonOutput.Number(w, "value", s.Value);
             Points(w, "poles", s.Poles);
