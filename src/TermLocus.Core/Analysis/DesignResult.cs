@@ -18,6 +18,13 @@ public sealed record DesignResult(
     ImmutableArray<FeasibleInterval> Intervals,
     DesignRecommendation? Recommended)
 {
+    /// <summary>
+    /// True when the intervals honour <c>max_overshoot_pct</c> too, judged on the simulated step response at every
+    /// point checked; false when the specs set no such limit or the loop gives only its characteristic polynomial
+    /// (then there is no response, and the band check cannot judge it either).
+    /// </summary>
+    public bool OvershootJudged { get; init; }
+
     /// <summary>True when some value of the span meets every spec at every point checked.</summary>
     public bool Feasible => !Intervals.IsEmpty;
 

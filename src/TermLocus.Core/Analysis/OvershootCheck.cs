@@ -44,7 +44,12 @@ public static class OvershootCheck
         return worst;
     }
 
-    private static BandOutcome? Measure(
+    /// <summary>
+    /// The overshoot at one point as a band outcome: null when there is no response to judge
+    /// (<see cref="LoopResponse.IsAvailable"/> false); margin minus infinity when the loop is unstable or its steady
+    /// state is 0. The one measurement both this check and <see cref="RobustDesign"/> use, so they agree to the bit.
+    /// </summary>
+    internal static BandOutcome? Measure(
         LoopModel model, IReadOnlyDictionary<string, double> values, double limit, ImmutableDictionary<string, double> at, bool atCorner)
     {
         var response = LoopResponse.Analyse(model, values);

@@ -37,6 +37,16 @@ public static class RobustDesign
     /// </summary>
     public const int MaxHintedCorners = 64;
 
+    /// <summary>
+    /// With an overshoot limit, the golden-section search for the recommended value stops at this share of the span's
+    /// scale rather than at <see cref="DesignOptimum.StopShare"/>: every step simulates responses, and a value printed
+    /// to six digits needs no more.
+    /// </summary>
+    public const double OvershootStopShare = 1e-8;
+
+    /// <summary>Fewest samples of the widest interval the recommended value is sought from, with an overshoot limit.</summary>
+    public const int MinRecommendSamples = 9;
+
     /// <summary>Intervals no wider than this share of the span's scale are rounding touches of a boundary and dropped.</summary>
     public const double MinWidthShare = 1e-10;
 
@@ -61,31 +71,49 @@ public static class RobustDesign
         var full = plant.NominalValues().SetItems(values);
         var box = ToleranceBox.FromPlant(plant, sweep, full);
         var points = DesignPoints.Create(model, full, box);
+        var criteria = new DesignCriteria(points, DesignOvershoot.Create(model, full, box));
         double scale = Scale(span);
         var found = SignIntervals.Find(p => points.At(p).Feasibility, span.Low, span.High, GridPoints,
-            Candidates(points, model, span));
-        var intervals = found
-            .Where(i => i.To - i.From > MinWidthShare * scale)
-            .Select(i => DesignLimits.Describe(points, span, i.From, i.To))
-            .ToImmutableArray();
+            Candidates(points, model, span)).Where(i => i.To - i.From > MinWidthShare * scale).ToList();
+        var sampled = new List<double>();
+        if (criteria.Overshoot is { } overshoot)
+        {
+            found = found.SelectMany(i => OvershootIntervals.Within(overshoot, i.From, i.To, scale, sampled))
+                .Where(i => i.To - i.From > MinWidthShare * scale).ToList();
+        }
+
+        var intervals = found.Select(i => DesignLimits.Describe(criteria, span, i.From, i.To)).ToImmutableArray();
         DesignRecommendation? recommended = null;
         if (intervals.MaxBy(i => i.Width) is { } widest)
         {
-            double best = DesignOptimum.Maximize(p => Objective(points, p), widest.From, widest.To, RecommendSamples, scale);
+            double best = criteria.Overshoot is null
+                ? DesignOptimum.Maximize(p => criteria.Objective(p, double.NegativeInfinity), widest.From, widest.To, RecommendSamples, scale)
+                : DesignOptimum.Maximize(criteria.Bound, criteria.Objective, RecommendationSamples(sampled, widest), scale, OvershootStopShare);
             var check = LoopCheck.Run(model, full.SetItem(sweep, best));
-            recommended = new DesignRecommendation(best, SmallestMargin(check, points.Limits), check);
+            recommended = new DesignRecommendation(best, SmallestMargin(check, criteria), check);
         }
 
-        return new DesignResult(sweep, span, box, points.Points.Length, intervals, recommended);
+        return new DesignResult(sweep, span, box, points.Points.Length, intervals, recommended)
+        {
+            OvershootJudged = criteria.Overshoot is not null,
+        };
     }
 
     /// <summary>The scale relative tolerances refer to: max(span width, |low|, |high|).</summary>
     internal static double Scale(Interval span) => Math.Max(span.Width, Math.Max(Math.Abs(span.Low), Math.Abs(span.High)));
 
-    private static double Objective(DesignPoints points, double p)
+    // The values the overshoot search sampled inside the interval (their responses are simulated already) and its ends;
+    // evenly spread values besides when that leaves too few.
+    private static List<double> RecommendationSamples(List<double> sampled, FeasibleInterval interval)
     {
-        var m = points.At(p);
-        return m.Formed && m.Stable ? m.Smallest : double.NegativeInfinity;
+        var xs = sampled.Where(x => x > interval.From && x < interval.To).Append(interval.From).Append(interval.To).ToHashSet();
+        if (xs.Count < MinRecommendSamples)
+        {
+            xs.UnionWith(Enumerable.Range(1, MinRecommendSamples - 2)
+                .Select(i => interval.From + (interval.Width * i / (MinRecommendSamples - 1))));
+        }
+
+        return [.. xs.Order()];
     }
 
     // Every point's hints, and the midpoints beside each hint (between it and its neighbours among the hints and the
@@ -111,10 +139,12 @@ public static class RobustDesign
         return result;
     }
 
-    // Over the pole limits the design works with (the check also judges overshoot, on the simulated response).
-    private static DesignMargin SmallestMargin(LoopCheckResult check, IReadOnlyList<(SpecKind Spec, double Limit)> limits)
+    // Over the limits the design judged (the check may also judge overshoot where the design could not: never, as both
+    // need the same step response).
+    private static DesignMargin SmallestMargin(LoopCheckResult check, DesignCriteria criteria)
     {
-        var tightest = check.Band.Where(b => limits.Any(l => l.Spec == b.Spec)).MinBy(b => b.WorstRelativeMargin);
+        var judged = criteria.Keys.ToHashSet(StringComparer.Ordinal);
+        var tightest = check.Band.Where(b => judged.Contains(b.Key)).MinBy(b => b.WorstRelativeMargin);
         if (check.StableAcrossBand && tightest is not null)
         {
             return new DesignMargin(tightest.Key, tightest.WorstMargin, tightest.WorstRelativeMargin, tightest.At, tightest.AtCorner);
