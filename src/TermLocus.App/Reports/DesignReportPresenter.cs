@@ -33,7 +33,9 @@ public static class DesignReportPresenter
         lines.Add(SafeText.Fit("  specs: " + Specs(plant.Specs, glyphs), CheckReportPresenter.Width));
         if (plant.Specs.MaxOvershootPct is not null)
         {
-            lines.Add("  note: max_overshoot_pct is a response figure, not a pole limit; the design does not use it");
+            lines.Add(result.OvershootJudged
+                ? "  overshoot: judged on the simulated step response at every band point, as check judges it"
+                : "  note: max_overshoot_pct is not judged: the loop gives only its characteristic polynomial, no response");
         }
 
         AddIntervals(lines, result, p);
@@ -60,7 +62,12 @@ public static class DesignReportPresenter
 
     private static string Specs(Specs specs, Glyphs g)
     {
-        var limits = SpecCheck.Limits(specs);
+        var limits = SpecCheck.Limits(specs).ToList();
+        if (specs.MaxOvershootPct is double overshoot)
+        {
+            limits.Add((SpecKind.MaxOvershootPct, overshoot));
+        }
+
         return limits.Count == 0
             ? "none: the intervals are where the closed loop is stable"
             : string.Join(", ", limits.Select(l =>
@@ -111,18 +118,22 @@ public static class DesignReportPresenter
     {
         lines.Add($"  recommended: {p} = {NumberText.Short(r.Value, 6)}{unit} (largest smallest margin in the widest interval)");
         var m = r.SmallestMargin;
-        string where = BandWording.Point(result.Box, m.At) + (m.AtCorner ? string.Empty : " (inside the band)");
+        string where = Where(result.Box, m.At) + (m.AtCorner ? string.Empty : " (inside the band)");
         string figure = m.Spec == DesignMargin.StabilityKey
             ? $"slowest decay rate {g.DecayRate} {NumberText.Significant(m.Margin)} 1/s"
             : $"{SafeText.Visible(m.Spec)} {NumberText.Significant(m.Margin)}{UnitOf(m.Spec)} ({Percent(m.RelativeMargin)} of the limit)";
         lines.Add(SafeText.Fit($"    smallest margin across the band: {figure} at {where}", CheckReportPresenter.Width));
+        if (result.OvershootJudged && r.Check.Band.FirstOrDefault(b => b.Spec == SpecKind.MaxOvershootPct) is { WorstActual: double pct } o)
+        {
+            lines.Add(SafeText.Fit($"    largest overshoot across the band: {NumberText.Significant(pct)} % (limit {NumberText.Exact(o.Limit)} %) at {Where(result.Box, o.At)}",
+                CheckReportPresenter.Width));
+        }
         string check = $"    band check at {p} = {NumberText.Short(r.Value, 6)} (corners and interior search): ";
         lines.Add(SafeText.Fit(r.Confirmed ? check + $"pass {g.Met}" : check + $"FAIL {g.Violated} " + Misses(result.Box, r.Check),
             CheckReportPresenter.Width));
     }
 
-    // What the full check found that the corners did not: an interior point of the band, or a limit the design does
-    // not use (overshoot, judged on the simulated response).
+    // What the full check found that the corners did not: an interior point of the band.
     private static string Misses(ToleranceBox box, LoopCheckResult check)
     {
         if (!check.StableAcrossBand)
@@ -130,8 +141,12 @@ public static class DesignReportPresenter
             return "unstable" + (check.WorstDecayRate is { } w ? " at " + BandWording.Point(box, w.At.Toleranced) : string.Empty);
         }
 
-        return string.Join("; ", check.Violated.Select(v => $"{v.Key} missed at {BandWording.Point(box, v.At)}"));
+        return string.Join("; ", check.Violated.Select(v => $"{v.Key} missed at {Where(box, v.At)}"));
     }
+
+    // The check names the nominal point by no values at all.
+    private static string Where(ToleranceBox box, IReadOnlyDictionary<string, double> at) =>
+        BandWording.Point(box, at) is { Length: > 0 } point ? point : "nominal";
 
     private static string UnitOf(string key) =>
         SpecKindText.TryParseKey(key, out var kind) && kind.Unit().Length > 0 ? " " + kind.Unit() : string.Empty;

@@ -32,9 +32,18 @@ internal static class DesignJson
         w.WriteEndObject();
         // How many band points the intervals were judged at (nominal and corners); interior points only at the recommendation.
         w.WriteNumber("points_checked", result.PointsChecked);
+        // Added within design/1: the limits the intervals honour (stability always besides), overshoot among them
+        // when it was judged on the simulated step response.
+        Keys(w, "limits_judged", LimitsJudged(input, result));
         Intervals(w, result);
         Recommended(w, result.Recommended);
         w.WriteEndObject();
+    }
+
+    private static IEnumerable<string> LimitsJudged(PlantInput input, DesignResult result)
+    {
+        var keys = SpecCheck.Limits(input.Plant.Specs).Select(l => l.Spec.Key());
+        return result.OvershootJudged ? keys.Append(SpecKind.MaxOvershootPct.Key()) : keys;
     }
 
     private static void Intervals(Utf8JsonWriter w, DesignResult result)
@@ -65,6 +74,27 @@ internal static class DesignJson
         w.WriteEndArray();
     }
 
+    // Added within design/1: the largest overshoot over the band points at the recommended value (null when the check
+    // judged none); percent, margin in percentage points.
+    private static void Overshoot(Utf8JsonWriter w, BandOutcome? o)
+    {
+        if (o is null)
+        {
+            w.WriteNull("overshoot");
+            return;
+        }
+
+        w.WritePropertyName("overshoot");
+        w.WriteStartObject();
+        JsonOutput.Number(w, "worst_pct", o.WorstActual);
+        JsonOutput.Number(w, "limit_pct", o.Limit);
+        JsonOutput.Number(w, "margin", o.WorstMargin);
+        JsonOutput.Number(w, "relative_margin", o.WorstRelativeMargin);
+        JsonOutput.Values(w, "corner", o.At);
+        w.WriteBoolean("at_corner", o.AtCorner);
+        w.WriteEndObject();
+    }
+
     private static void Recommended(Utf8JsonWriter w, DesignRecommendation? r)
     {
         if (r is null)
@@ -84,6 +114,7 @@ internal static class DesignJson
         JsonOutput.Values(w, "corner", r.SmallestMargin.At);
         w.WriteBoolean("at_corner", r.SmallestMargin.AtCorner);
         w.WriteEndObject();
+        Overshoot(w, r.Check.Band.FirstOrDefault(b => b.Spec == SpecKind.MaxOvershootPct));
         w.WriteString("verdict", r.Confirmed ? "pass" : "fail");
         w.WriteEndObject();
     }
