@@ -32,9 +32,6 @@ internal sealed class DesignOvershoot
     /// <summary>The limit, percent.</summary>
     public double Limit { get; }
 
-    /// <summary>Step responses simulated so far (for the benchmarks' and tests' accounting).</summary>
-    public int Simulations { get; private set; }
-
     /// <summary>
     /// The judge of <paramref name="model"/>'s overshoot limit at the full <paramref name="values"/> over
     /// <paramref name="box"/>; null when the specs set no limit or the loop gives only its characteristic polynomial
@@ -146,7 +143,6 @@ internal sealed class DesignOvershoot
 
     private double Measure(int point, double p)
     {
-        Simulations++;
         var values = points[point];
         values[sweep] = p;
         try

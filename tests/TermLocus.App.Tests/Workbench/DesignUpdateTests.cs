@@ -1,5 +1,6 @@
 using TermLocus.App.Text;
 using TermLocus.App.Workbench;
+using TermLocus.Core.Plants;
 
 namespace TermLocus.App.Tests.Workbench;
 
@@ -80,6 +81,27 @@ public class DesignUpdateTests
         }
 
         Assert.EndsWith($"..4 d {rec}", line.TrimEnd(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void An_overshoot_limit_shortens_the_bar_and_d_stays_inside_it()
+    {
+        // As above with max_overshoot_pct = 10 besides ζ >= 0.4. Overshoot 100·exp(-πζ/√(1-ζ²)) <= 10 % needs
+        // ζ >= 0.5912 (Ogata, Modern Control Engineering, 5th ed., §5-3; from memory), at a = 1.6 K <= (0.8/0.5912)²
+        // = 1.831, well inside the damping limit's 4.
+        var opened = BandPlants.Opened(BandPlants.Quadratic(specs: new Specs(MinDamping: 0.4, MaxOvershootPct: 10)));
+        var state = Update.Receive(opened, CoreBridge.Design(opened.Session!.Loaded)).State;
+        var result = state.Session!.Design!.Result!;
+        double l = Math.Log(0.1), zeta = -l / Math.Sqrt((Math.PI * Math.PI) + (l * l)), upper = Math.Pow(0.8 / zeta, 2);
+        var interval = Assert.Single(result.Intervals);
+        Assert.Equal(upper, interval.To, 1e-5 * upper);
+        Assert.Equal(["max_overshoot_pct"], [.. interval.ToLimitedBy]);
+        string line = DesignBarPresenter.Line(state.Session, 60, Glyphs.Ascii)!;
+        Assert.Contains("..1.831 d ", line, StringComparison.Ordinal);
+
+        var (after, _) = Update.Apply(state, Command.JumpToRecommended);
+        Assert.InRange(after.Session!.Sweep.Value, interval.From, interval.To);
+        Assert.Contains("..1.831;", after.Message!.Text, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -185,21 +185,82 @@ public class DesignVerbTests
     }
 
     [Fact]
-    public void Overshoot_is_left_to_the_band_check_and_the_smallest_margin_is_a_pole_limit()
+    public void An_overshoot_limit_that_does_not_bind_is_named_as_judged_and_the_smallest_margin_is_a_pole_limit()
     {
-        // The Ogata loop again with the pole a toleranced and an overshoot limit: the design works on ζ only; the
-        // report says so and every line still fits 100 columns although both ends carry two limits.
+        // The Ogata loop again with the pole a toleranced and an overshoot limit of 25 %: ζ >= 0.5 keeps the overshoot
+        // well below it, so min_damping still ends the interval; the report says overshoot was judged and every line
+        // still fits 100 columns although the lower end carries two limits.
         string file = RepoFiles.TempPlant(OgataLoop.Replace("[loop]", "a = { value = 1.0, tolerance_pct = 20 }\n[loop]", StringComparison.Ordinal)
             .Replace("(s + 1)", "(s + a)", StringComparison.Ordinal) + "\nmax_overshoot_pct = 25\n");
         var (code, stdout, _) = CliRunner.Run("design", file, "--json");
         Assert.Equal(0, code);
         using var doc = JsonDocument.Parse(stdout);
-        Assert.Equal("min_damping", doc.RootElement.GetProperty("recommended").GetProperty("smallest_margin").GetProperty("spec").GetString());
+        var root = doc.RootElement;
+        Assert.Equal(["min_damping", "max_overshoot_pct"], Strings(root.GetProperty("limits_judged")));
+        Assert.Equal(["min_damping"], Strings(root.GetProperty("intervals")[0].GetProperty("to_limited_by")));
+        var recommended = root.GetProperty("recommended");
+        Assert.Equal("min_damping", recommended.GetProperty("smallest_margin").GetProperty("spec").GetString());
+        Assert.True(recommended.GetProperty("overshoot").GetProperty("worst_pct").GetDouble() <= 25.0);
+        Assert.Equal(25.0, recommended.GetProperty("overshoot").GetProperty("limit_pct").GetDouble());
 
         var text = CliRunner.Run("design", file);
-        Assert.Contains("max_overshoot_pct is a response figure", text.Out, StringComparison.Ordinal);
+        Assert.Contains("max_overshoot_pct ≤ 25 %", text.Out, StringComparison.Ordinal);
+        Assert.Contains("overshoot: judged on the simulated step response", text.Out, StringComparison.Ordinal);
+        Assert.Contains("largest overshoot across the band:", text.Out, StringComparison.Ordinal);
         Assert.All(text.Out.TrimEnd('\n').Split('\n'), line => Assert.True(line.Length <= 100, line));
         Assert.Contains("below: min_damping and stability", text.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void An_overshoot_limit_ends_the_interval_at_the_handbook_gain_and_the_check_verb_agrees_on_both_sides()
+    {
+        // K/(s(s + 2)) with time to half <= 1 s: every K >= 1 gives complex poles at σ = 1 1/s, so the pole limits
+        // alone would leave the whole span up to 80 and recommend a gain far beyond the overshoot limit. ζ = 2/(2√K),
+        // and overshoot 100·exp(-πζ/√(1-ζ²)) <= 10 % (Ogata, Modern Control Engineering, 5th ed., Sec. 5-3, from
+        // memory) gives K <= 1/ζ*², ζ* = -ln 0.1/√(π² + ln² 0.1) = 0.5912, K <= 2.8615.
+        string file = RepoFiles.TempPlant("""
+            title = "second-order overshoot"
+            [parameters]
+            K = { value = 1.0, range = [0.0, 80.0] }
+            [loop]
+            plant = "K / (s*(s + 2))"
+            sweep = "K"
+            [specs]
+            max_time_to_half = 1.0
+            max_overshoot_pct = 10
+            """);
+        var (code, stdout, stderr) = CliRunner.Run("design", file, "--json");
+        Assert.True(code == 0, stderr);
+        using var doc = JsonDocument.Parse(stdout);
+        double l = Math.Log(0.1), zeta = -l / Math.Sqrt((Math.PI * Math.PI) + (l * l)), upper = 1.0 / (zeta * zeta);
+        var interval = Assert.Single(doc.RootElement.GetProperty("intervals").EnumerateArray().ToList());
+        double to = interval.GetProperty("to").GetDouble();
+        Assert.Equal(upper, to, 1e-5 * upper); // the simulated figure's accuracy, see RobustDesign
+        Assert.Equal(["max_overshoot_pct"], Strings(interval.GetProperty("to_limited_by")));
+        Assert.Equal("pass", doc.RootElement.GetProperty("recommended").GetProperty("verdict").GetString());
+
+        string value = doc.RootElement.GetProperty("recommended").GetProperty("value").GetDouble().ToString("R", CultureInfo.InvariantCulture);
+        Assert.Equal(0, CliRunner.Run("check", file, "--set", "K=" + value).Code);
+        Assert.Equal(0, CliRunner.Run("check", file, "--set", "K=" + (to * (1 - 1e-6)).ToString("R", CultureInfo.InvariantCulture)).Code);
+        Assert.Equal(1, CliRunner.Run("check", file, "--set", "K=" + (to * (1 + 1e-6)).ToString("R", CultureInfo.InvariantCulture)).Code);
+
+        var text = CliRunner.Run("design", file);
+        Assert.Contains("above: max_overshoot_pct", text.Out, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_characteristic_polynomial_alone_leaves_the_overshoot_limit_unjudged_and_says_so()
+    {
+        // The Ogata loop's characteristic s^3 + 3s^2 + 2s + K (expanded by hand) gives no step response to simulate.
+        string file = RepoFiles.TempPlant(OgataLoop.Replace("plant = \"K / (s*(s + 1)*(s + 2))\"",
+            "characteristic = \"s^3 + 3*s^2 + 2*s + K\"", StringComparison.Ordinal) + "\nmax_overshoot_pct = 5\n");
+        var (code, stdout, _) = CliRunner.Run("design", file, "--json");
+        Assert.Equal(0, code);
+        using var doc = JsonDocument.Parse(stdout);
+        Assert.Equal(["min_damping"], Strings(doc.RootElement.GetProperty("limits_judged")));
+        Assert.Equal(28.0 / 27.0, doc.RootElement.GetProperty("intervals")[0].GetProperty("to").GetDouble(), 1e-9);
+        Assert.Equal(JsonValueKind.Null, doc.RootElement.GetProperty("recommended").GetProperty("overshoot").ValueKind);
+        Assert.Contains("max_overshoot_pct is not judged", CliRunner.Run("design", file).Out, StringComparison.Ordinal);
     }
 
     private static string[] Strings(JsonElement array) => [.. array.EnumerateArray().Select(e => e.GetString()!)];
