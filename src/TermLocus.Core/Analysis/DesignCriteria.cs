@@ -34,9 +34,10 @@ internal sealed class DesignCriteria
     /// The design objective at <paramref name="p"/>, exact when at least <paramref name="floor"/>, otherwise some value
     /// below it (then no further response is simulated): −∞ where the loop is not formed or not stable at some point;
     /// without overshoot, <see cref="DesignMarginsAt.Smallest"/>; with it, the smaller of the smallest relative pole
-    /// margin (left out when the file sets no pole limit) and the relative overshoot margin.
+    /// margin (left out when the file sets no pole limit) and the relative overshoot margin. With
+    /// <paramref name="withOvershoot"/> false, the objective as if overshoot were not judged.
     /// </summary>
-    public double Objective(double p, double floor)
+    public double Objective(double p, double floor, bool withOvershoot = true)
     {
         var m = Points.At(p);
         if (!m.Formed || !m.Stable)
@@ -44,7 +45,7 @@ internal sealed class DesignCriteria
             return double.NegativeInfinity;
         }
 
-        if (Overshoot is null)
+        if (Overshoot is null || !withOvershoot)
         {
             return m.Smallest;
         }

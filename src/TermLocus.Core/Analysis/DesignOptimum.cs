@@ -21,11 +21,18 @@ internal static class DesignOptimum
     /// e.g. ζ = 1 for every overdamped value), the middle of that run is returned, as far as the samples tell from both
     /// of its ends.
     /// </summary>
-    public static double Maximize(Func<double, double> f, double a, double b, int samples, double scale)
+    public static double Maximize(Func<double, double> f, double a, double b, int samples, double scale) =>
+        MaximizeOrPlateau(f, a, b, samples, scale).X;
+
+    /// <summary>
+    /// As <see cref="Maximize(Func{double, double}, double, double, int, double)"/>, with the value there, or null
+    /// when the result is the middle of a plateau (not valued; then it is one of many equally good arguments).
+    /// </summary>
+    public static (double X, double? Value) MaximizeOrPlateau(Func<double, double> f, double a, double b, int samples, double scale)
     {
         if (!(b > a))
         {
-            return a;
+            return (a, f(a));
         }
 
         var xs = new double[samples];
@@ -78,28 +85,18 @@ internal static class DesignOptimum
 
     // The best sample, the middle of a plateau of equally best ones, or the golden-section maximum between the best
     // sample's neighbours when that beats it. Every sample at or above the plateau level is exact.
-    private static double Refine(Func<double, double, double> f, double[] xs, double[] fs, double tolerance)
+    private static (double X, double? Value) Refine(Func<double, double, double> f, double[] xs, double[] fs, double tolerance)
     {
         int k = Array.IndexOf(fs, fs.Max());
         double level = Level(fs[k]);
-        int first = k, last = k;
-        while (first > 0 && fs[first - 1] >= level)
-        {
-            first--;
-        }
-
-        while (last < xs.Length - 1 && fs[last + 1] >= level)
-        {
-            last++;
-        }
-
+        var (first, last) = RunAt(fs, k, level);
         if (last > first)
         {
-            return xs[first] + ((xs[last] - xs[first]) / 2.0);
+            return (xs[first] + ((xs[last] - xs[first]) / 2.0), null);
         }
 
         var (x, fx) = Golden(f, xs[Math.Max(k - 1, 0)], xs[Math.Min(k + 1, xs.Length - 1)], tolerance);
-        return fx > fs[k] ? x : xs[k];
+        return fx > fs[k] ? (x, fx) : (xs[k], fs[k]);
     }
 
     // Golden section between the best sample's neighbours; when that finds nothing better than the plateau level
@@ -109,8 +106,8 @@ internal static class DesignOptimum
     {
         int k = Array.IndexOf(fs, fs.Max());
         double level = Level(fs[k]);
-        bool run = (k > 0 && fs[k - 1] >= level) || (k < xs.Length - 1 && fs[k + 1] >= level);
-        if (!run)
+        var (first, last) = RunAt(fs, k, level);
+        if (first == last)
         {
             var (x, fx) = Golden(f, xs[Math.Max(k - 1, 0)], xs[Math.Min(k + 1, xs.Length - 1)], tolerance);
             if (fx > fs[k] && Level(fx) > fs[k])
@@ -119,20 +116,12 @@ internal static class DesignOptimum
             }
         }
 
-        int first = k, last = k;
-        while (first > 0 && fs[first - 1] >= level)
-        {
-            first--;
-        }
-
-        while (last < xs.Length - 1 && fs[last + 1] >= level)
-        {
-            last++;
-        }
-
         double from = first > 0 ? PlateauEnd(f, xs[first - 1], xs[first], level, tolerance) : xs[first];
         double to = last < xs.Length - 1 ? PlateauEnd(f, xs[last + 1], xs[last], level, tolerance) : xs[last];
-        return from + ((to - from) / 2.0);
+        double middle = from + ((to - from) / 2.0);
+
+        // The stretch is taken to be one piece; should something dip in between, the best sample stands.
+        return f(middle, level) >= level ? middle : xs[k];
     }
 
     // The end of {x : f(x) >= level} between a point below the level and one at or above it, bisected to the tolerance.
@@ -152,6 +141,23 @@ internal static class DesignOptimum
         }
 
         return atLevel;
+    }
+
+    // The samples next to k, k included, at or above the level.
+    private static (int First, int Last) RunAt(double[] fs, int k, double level)
+    {
+        int first = k, last = k;
+        while (first > 0 && fs[first - 1] >= level)
+        {
+            first--;
+        }
+
+        while (last < fs.Length - 1 && fs[last + 1] >= level)
+        {
+            last++;
+        }
+
+        return (first, last);
     }
 
     private static double Level(double best) => best - (PlateauShare * Math.Max(1.0, Math.Abs(best)));

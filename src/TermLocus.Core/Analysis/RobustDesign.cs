@@ -37,7 +37,10 @@ namespace TermLocus.Core.Analysis;
 /// no pole limit it is the whole objective. Without overshoot the interval is sampled at <see cref="RecommendSamples"/>
 /// values, then refined by golden-section search around the best sample to 1e-10 of the span's scale. The margin is
 /// a minimum of smooth pieces, so its maximum is often a kink where two limits are equally tight; golden-section
-/// search needs no derivative. With overshoot the samples are the values the overshoot search simulated (at least
+/// search needs no derivative. With overshoot, the pole margins' best value is found that way first; the smallest
+/// margin can nowhere exceed the pole margins, so when the overshoot margin there is no smaller, that value stands
+/// (one more simulation per point). Otherwise, or when the pole margins' best is a plateau, the search is over both
+/// margins: the samples are the values the overshoot search simulated (at least
 /// <see cref="MinRecommendSamples"/>), valued best bound first so that values the pole margins already rule out are
 /// not simulated; the golden-section search stops at <see cref="OvershootStopShare"/>; and when the best value is
 /// held over a stretch (no overshoot at all, say), the ends of that plateau are solved by bisection and its middle
@@ -107,7 +110,7 @@ public static class RobustDesign
         {
             double best = criteria.Overshoot is null
                 ? DesignOptimum.Maximize(p => criteria.Objective(p, double.NegativeInfinity), widest.From, widest.To, RecommendSamples, scale)
-                : DesignOptimum.Maximize(criteria.Bound, criteria.Objective, RecommendationSamples(sampled, widest), scale, OvershootStopShare);
+                : RecommendWithOvershoot(criteria, criteria.Overshoot, widest, sampled, scale);
             var check = LoopCheck.Run(model, full.SetItem(sweep, best));
             recommended = new DesignRecommendation(best, SmallestMargin(check, criteria), check);
         }
@@ -120,6 +123,26 @@ public static class RobustDesign
 
     /// <summary>The scale relative tolerances refer to: max(span width, |low|, |high|).</summary>
     internal static double Scale(Interval span) => Math.Max(span.Width, Math.Max(Math.Abs(span.Low), Math.Abs(span.High)));
+
+    // The pole margins' best value first, found as without overshoot (root finds only): the smallest margin cannot
+    // exceed the pole margins anywhere, so when the overshoot margin there is no smaller, that value is the best of
+    // both. Otherwise (or on a plateau, whose middle depends on both) the search over both margins.
+    private static double RecommendWithOvershoot(
+        DesignCriteria criteria, DesignOvershoot overshoot, FeasibleInterval widest, List<double> sampled, double scale)
+    {
+        if (criteria.Points.Limits.Count > 0)
+        {
+            var (poles, value) = DesignOptimum.MaximizeOrPlateau(
+                p => criteria.Objective(p, double.NegativeInfinity, withOvershoot: false), widest.From, widest.To, RecommendSamples, scale);
+            if (value is double best && overshoot.MarginAt(poles, best) >= best)
+            {
+                return poles;
+            }
+        }
+
+        return DesignOptimum.Maximize(
+            criteria.Bound, (p, floor) => criteria.Objective(p, floor), RecommendationSamples(sampled, widest), scale, OvershootStopShare);
+    }
 
     // The values the overshoot search sampled inside the interval (their responses are simulated already) and its ends;
     // evenly spread values besides when that leaves too few.
