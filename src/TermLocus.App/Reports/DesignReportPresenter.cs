@@ -30,7 +30,7 @@ public static class DesignReportPresenter
         lines.Add(SafeText.Fit($"{SafeText.Visible(file)}  {SafeText.Visible(plant.Title)}", CheckReportPresenter.Width));
         lines.Add($"  sweep: {p} from {Num(result.Span.Low)} to {Num(result.Span.High)}{unit}");
         lines.AddRange(Band(result));
-        lines.Add(SafeText.Fit("  specs: " + Specs(plant.Specs, glyphs), CheckReportPresenter.Width));
+        lines.AddRange(Wrapped("  specs: ", Specs(plant.Specs, glyphs)));
         if (plant.Specs.MaxOvershootPct is not null)
         {
             lines.Add(result.OvershootJudged
@@ -60,7 +60,7 @@ public static class DesignReportPresenter
         yield return "  are searched only at the recommended value";
     }
 
-    private static string Specs(Specs specs, Glyphs g)
+    private static List<string> Specs(Specs specs, Glyphs g)
     {
         var limits = SpecCheck.Limits(specs).ToList();
         if (specs.MaxOvershootPct is double overshoot)
@@ -69,13 +69,34 @@ public static class DesignReportPresenter
         }
 
         return limits.Count == 0
-            ? "none: the intervals are where the closed loop is stable"
-            : string.Join(", ", limits.Select(l =>
+            ? ["none: the intervals are where the closed loop is stable"]
+            : [.. limits.Select(l =>
             {
                 string relation = SpecWording.IsMinimum(l.Spec.Key()) ? g.AtLeast : g.AtMost;
                 string u = l.Spec.Unit();
                 return $"{l.Spec.Key()} {relation} {NumberText.Exact(l.Limit)}{(u.Length > 0 ? " " + u : string.Empty)}";
-            }));
+            })];
+    }
+
+    // Items joined by ", " after the heading, continued under the first item when a line would pass the width.
+    private static List<string> Wrapped(string heading, List<string> items)
+    {
+        var lines = new List<string>();
+        string line = heading;
+        for (int i = 0; i < items.Count; i++)
+        {
+            string item = items[i] + (i < items.Count - 1 ? "," : string.Empty);
+            if (line.Length > heading.Length && line.Length + 1 + item.Length > CheckReportPresenter.Width)
+            {
+                lines.Add(line);
+                line = new string(' ', heading.Length);
+            }
+
+            line += (line.Length > heading.Length ? " " : string.Empty) + item;
+        }
+
+        lines.Add(SafeText.Fit(line, CheckReportPresenter.Width));
+        return lines;
     }
 
     private static void AddIntervals(ImmutableArray<string>.Builder lines, DesignResult result, string p)

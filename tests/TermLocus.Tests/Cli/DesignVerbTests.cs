@@ -249,6 +249,32 @@ public class DesignVerbTests
     }
 
     [Fact]
+    public void The_conveyor_demo_with_a_12_percent_limit_is_bounded_by_overshoot_at_both_ends_and_its_value_passes_check()
+    {
+        // Invented limit on the demo file: its overshoot is about 23 % at the low end of the pole-feasible gains, 9 % in
+        // the middle and 14.5 % at the high end, so 12 % cuts both ends. All text still fits 100 columns, the four
+        // limits wrapping onto a second line.
+        string text = File.ReadAllText(RepoFiles.Plant("conveyor-speed.toml"))
+            .Replace("max_natural_frequency = 400", "max_natural_frequency = 400\nmax_overshoot_pct = 12", StringComparison.Ordinal);
+        string file = RepoFiles.TempPlant(text);
+        var (code, stdout, _) = CliRunner.Run("design", file, "--json");
+        Assert.Equal(0, code);
+        using var doc = JsonDocument.Parse(stdout);
+        var interval = Assert.Single(doc.RootElement.GetProperty("intervals").EnumerateArray().ToList());
+        Assert.Equal(["max_overshoot_pct"], Strings(interval.GetProperty("from_limited_by")));
+        Assert.Equal(["max_overshoot_pct"], Strings(interval.GetProperty("to_limited_by")));
+        var recommended = doc.RootElement.GetProperty("recommended");
+        Assert.True(recommended.GetProperty("overshoot").GetProperty("worst_pct").GetDouble() <= 12.0);
+        string value = recommended.GetProperty("value").GetDouble().ToString("R", CultureInfo.InvariantCulture);
+        Assert.Equal(0, CliRunner.Run("check", file, "--set", "Kp=" + value).Code);
+
+        var lines = CliRunner.Run("design", file).Out.TrimEnd('\n').Split('\n');
+        Assert.All(lines, line => Assert.True(line.Length <= 100, line));
+        Assert.Contains(lines, l => l.StartsWith("         max_overshoot_pct ", StringComparison.Ordinal));
+        Assert.Contains(lines, l => l.Contains("below: max_overshoot_pct; above: max_overshoot_pct", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_characteristic_polynomial_alone_leaves_the_overshoot_limit_unjudged_and_says_so()
     {
         // The Ogata loop's characteristic s^3 + 3s^2 + 2s + K (expanded by hand) gives no step response to simulate.
