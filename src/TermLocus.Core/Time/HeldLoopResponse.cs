@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Diagnostics.CodeAnalysis;
 using System.Globalization;
 using System.Numerics;
+using System.Runtime.InteropServices;
 using TermLocus.Core.Algebra;
 
 namespace TermLocus.Core.Time;
@@ -137,28 +138,28 @@ public static class HeldLoopResponse
         return true;
     }
 
+    // The arrays become the traces' storage without a copy: a long trace is one large-object allocation, not two.
     private static SampledLoopTrace Pack(double[] outputs, double sampleTime, int points)
     {
         double h = sampleTime / points;
-        var times = new double[outputs.Length];
-        for (int i = 0; i < times.Length; i++)
-        {
-            int k = i / points, j = i % points;
-            times[i] = (k * sampleTime) + (j * h);
-        }
-
         int samples = ((outputs.Length - 1) / points) + 1;
+        var times = new double[outputs.Length];
         var sampleTimes = new double[samples];
         var sampleOutputs = new double[samples];
         for (int k = 0; k < samples; k++)
         {
-            sampleTimes[k] = times[k * points];
+            double start = k * sampleTime;
+            sampleTimes[k] = start;
             sampleOutputs[k] = outputs[k * points];
+            for (int j = 0; j < points && (k * points) + j < times.Length; j++)
+            {
+                times[(k * points) + j] = start + (j * h);
+            }
         }
 
         return new SampledLoopTrace(
-            new ResponseTrace(ImmutableArray.Create(times), ImmutableArray.Create(outputs)),
-            new ResponseTrace(ImmutableArray.Create(sampleTimes), ImmutableArray.Create(sampleOutputs)),
+            new ResponseTrace(ImmutableCollectionsMarshal.AsImmutableArray(times), ImmutableCollectionsMarshal.AsImmutableArray(outputs)),
+            new ResponseTrace(ImmutableCollectionsMarshal.AsImmutableArray(sampleTimes), ImmutableCollectionsMarshal.AsImmutableArray(sampleOutputs)),
             points);
     }
 

@@ -46,23 +46,25 @@ internal sealed class HeldLoopRun
         var bc = controller.B.ToArray();
         var cc = controller.C.ToArray();
         var cs = plant.Series.C.ToArray();
+        double sensorFeedthrough = plant.Series.D, feedthrough = plant.PlantFeedthrough;
+        var (rows, oldGains, newGains, holdsOld) = (offsets.OutputRows, offsets.OldGains, offsets.NewGains, offsets.HoldsOld);
         bool instant = wholeSamples == 0 && !hasRemainder;
         for (int k = 0; k < samples; k++)
         {
             // The plant input at the instant: u_{k−m−1} with a remainder, u_{k−m} without (u_k itself: solved for).
             double vOld = Held(u, k - wholeSamples - 1);
             double atInstant = hasRemainder ? vOld : Held(u, k - wholeSamples);
-            double free = Dot(cc, xi) + (controller.D * (1.0 + (sign * Dot(cs, x))));
-            u[k] = instant ? free / instantLoopGain : free + (controller.D * sign * plant.Series.D * atInstant);
-            double sensed = Dot(cs, x) + (plant.Series.D * (instant ? u[k] : atInstant));
+            double fromState = Dot(cs, x);
+            double free = Dot(cc, xi) + (controller.D * (1.0 + (sign * fromState)));
+            u[k] = instant ? free / instantLoopGain : free + (controller.D * sign * sensorFeedthrough * atInstant);
+            double sensed = fromState + (sensorFeedthrough * (instant ? u[k] : atInstant));
             Step(ac, bc, xi, 1.0 + (sign * sensed), next);
             double vNew = Held(u, k - wholeSamples);
             int last = k == samples - 1 ? 1 : points;
             for (int j = 0; j < last; j++)
             {
-                double v = offsets.HoldsOld[j] ? vOld : vNew;
-                y[(k * points) + j] = Dot(offsets.OutputRows[j], x) + (offsets.OldGains[j] * vOld) + (offsets.NewGains[j] * vNew)
-                    + (plant.PlantFeedthrough * v);
+                double v = holdsOld[j] ? vOld : vNew;
+                y[(k * points) + j] = Dot(rows[j], x) + (oldGains[j] * vOld) + (newGains[j] * vNew) + (feedthrough * v);
             }
 
             Propagate(x, vNew, vOld, next);
