@@ -19,9 +19,7 @@ internal static class SampledLoopResponse
         bool stable = LoopStability.IsStableInZ(closed.Denominator);
         var estimate = Estimate(model, closed);
         string? warning = model.SamplingWarning(values);
-        int points = HeldLoopResponse.PointsPerSample(parts.Plant, t, samples);
-        if (HeldLoopResponse.TrySimulate(
-                parts.Controller, parts.Plant, parts.Sensor, model.IsPositiveFeedback, t, model.DelaySeconds, samples, points, out var held, out string? why))
+        if (BetweenSamples(model, parts, samples, out string? why) is { } held)
         {
             return new LoopResponse(
                 model.Plane, ResponseMethod.SampledBetweenSamples, held.BetweenSamples, stable, steady,
@@ -44,8 +42,23 @@ internal static class SampledLoopResponse
         };
     }
 
-    // Long enough for the output at the instants and for the controller output: a plant mode the controller cancels
-    // leaves the instants at once but rings on in u, and so in the plant output between samples.
+    private static SampledLoopTrace? BetweenSamples(LoopModel model, SampledLoopParts parts, int samples, out string? why)
+    {
+        double t = model.Plane.SampleTimeSeconds!.Value;
+        int points = HeldLoopResponse.PointsPerSample(parts.Plant, t, samples);
+        if (!HeldLoopResponse.TrySimulate(
+                parts.Controller, parts.Plant, parts.Sensor, model.IsPositiveFeedback, t, model.DelaySeconds, samples, points, out var held, out why))
+        {
+            return null;
+        }
+
+        why = held.BetweenSamples.Outputs.All(double.IsFinite) ? null : "it overflows between the sample instants";
+        return why is null ? held : null;
+    }
+
+    // Long enough for the output at the instants and for the controller output: a controller pole that cancels a zero
+    // of the held plant (a sampling zero near −1, say) leaves the instants at once but rings on in u, and so in the
+    // plant output between samples.
     private static int Samples(RationalFunction closed, SampledLoopParts parts, double t, double delay)
     {
         int output = ResponseGrid.ForSampled(closed, t, delay).Samples;

@@ -74,7 +74,8 @@ public sealed record StepFigures(
     /// <summary>
     /// The figures of a sampled loop's output sequence (<see cref="StepResponse.SimulateSampled"/>): as
     /// <see cref="From(ResponseTrace, double?)"/>, except that the peak is the largest sample itself, not a parabola
-    /// through three samples, since nothing is known between the sample instants. Rise and settling times are still
+    /// through three samples, since only the instants are given (the output between them is
+    /// <see cref="HeldLoopResponse"/>'s, measured by <see cref="FromBetweenSamples"/>). Rise and settling times are still
     /// interpolated linearly between samples.
     /// </summary>
     public static StepFigures? FromSamples(ResponseTrace trace, double? steadyState)
