@@ -65,6 +65,23 @@ public class SampledLocusFactsTests
     }
 
     [Fact]
+    public void A_negative_gain_pushes_the_integrators_root_out_through_z_equals_one()
+    {
+        // The motor loop at T = 1 s over K in [−1, 3]. Jury's P(1) &gt; 0 with the coefficients above:
+        // P(1) = 1 + a₁ + a₀ = K(T − 1 + a) + K(1 − a − Ta) = K·T(1 − a), positive only for K &gt; 0 (worked by hand). So
+        // the stable range is (0, 2.3922): a real root leaves through z = 1 (angle 0, frequency 0) as K falls through 0.
+        var model = Sampled([("K", 1.0)], "K/(s*(s+1))", 1.0);
+        var study = LocusStudy.Run(model.Family("K", Values()), model.Plane, new Interval(-1.0, 3.0), Specs.None);
+        var stable = Assert.Single(study.Facts.StableIntervals);
+        Assert.Equal(0.0, stable.From, 1e-9);
+        Assert.Equal((Math.E - 1) / (Math.E - 2), stable.To, 1e-7);
+        Assert.Equal(2, study.UnitCircleCrossings.Length);
+        Assert.Equal(0.0, study.UnitCircleCrossings[0].Value, 1e-9);
+        Assert.Equal(0.0, study.UnitCircleCrossings[0].AngleRadians, 1e-6);
+        Assert.Equal(0.0, study.UnitCircleCrossings[0].EquivalentFrequency, 1e-6);
+    }
+
+    [Fact]
     public void One_sample_of_delay_lowers_the_motor_loops_critical_gain_to_the_cubic_jury_limit()
     {
         // K/(s(s + 1)), T = 1 s, delay T: P = z·(z² − (1 + a)z + a) + K(a·z + b), a = e^{−1}, b = 1 − 2e^{−1}
