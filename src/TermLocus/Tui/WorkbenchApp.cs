@@ -79,6 +79,7 @@ public static class WorkbenchApp
         var (state, effects) = Update.Start(plantFile, folder);
         var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UtcNow, $"{Environment.UserName}@{Environment.MachineName}"));
         using IApplication app = Application.Create();
+        var quietInput = QuietInputInstaller.TryInstall(app);
         app.Init(DriverRegistry.Names.ANSI);
         TerminalSetup.Configure(app, noMouse);
 
@@ -103,6 +104,11 @@ public static class WorkbenchApp
             // Keep the user's value before the terminal is restored and the report printed.
             WriteRecovery(controller.State, worker);
             return (e, 70);
+        }
+        finally
+        {
+            // Disposing the application waits for the input loop, which may be blocked waiting for a key.
+            quietInput?.WakeUp();
         }
     }
 
