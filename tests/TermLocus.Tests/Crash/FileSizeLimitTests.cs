@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Runtime.Versioning;
+using System.Text.RegularExpressions;
 using TermLocus.Core.Plants;
 using TermLocus.Tests.Cli;
 
@@ -30,7 +31,8 @@ public sealed class FileSizeLimitTests : IDisposable
 
         Assert.Equal(2, code);
         Assert.Equal("", stdout);
-        Assert.Matches($"^{folder.Plant}: error: could not save {folder.Plant}: the new file \\(1[0-9]{{3}} bytes\\) is larger than the file-size limit \\(ulimit -f\\) or the file system allows; the file is unchanged\n$", stderr);
+        string plant = Regex.Escape(folder.Plant);
+        Assert.Matches($"^{plant}: error: could not save {plant}: the new file \\(1[0-9]{{3}} bytes\\) is larger than the file-size limit \\(ulimit -f\\) or the file system allows; the file is unchanged\n$", stderr);
         Assert.Equal(before, File.ReadAllBytes(folder.Plant));
         Assert.Equal(["plant.toml"], Directory.GetFiles(folder.Library).Select(Path.GetFileName));
     }
