@@ -102,16 +102,18 @@ internal static partial class CoreBridge
         return PlantFileReader.ReadDocument(document.Path);
     }
 
-    /// <summary>Writes what saving would write to <c>&lt;plant&gt;.recovery</c>; the plant file is not touched.</summary>
+    /// <summary>
+    /// Writes what saving would write to <c>&lt;plant&gt;.recovery</c> the same crash-safe way as a save (flushed, renamed
+    /// into place; a new recovery file gets the plant file's permission bits); the plant file is not touched.
+    /// </summary>
+    /// <exception cref="IOException">The recovery file could not be written (the message says why).</exception>
     public static string WriteRecovery(LoadedPlant loaded, double value, string? verdict, SaveContext context)
     {
         var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
         var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context, null, null));
         string target = SaveRecoveryEffect.RecoveryPathFor(document.Path);
-        string temporary = target + ".tmp";
-        File.WriteAllBytes(temporary, bytes);
-        File.Move(temporary, target, overwrite: true);
-        return target;
+        var result = AtomicFileSaver.TryWriteFile(target, bytes, overwrite: true, permissionsOf: document.Path);
+        return result.Succeeded ? target : throw new IOException(result.Message);
     }
 
     /// <summary>Builds the loop of a plant not read from a file (nothing to save into). Throws <see cref="PlantFileException"/>.</summary>
