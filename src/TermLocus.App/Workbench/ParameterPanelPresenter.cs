@@ -29,11 +29,17 @@ public static class ParameterPanelPresenter
             lines.Add(ValueLine(sweep));
             lines.Add("step " + NumberText.Exact(sweep.Step));
             lines.Add(sweep.Unsaved ? $"{glyphs.Violated} unsaved (file: {NumberText.Exact(sweep.SavedValue)})" : "saved in the file");
+            if (DiskLine(session.Disk, glyphs) is { } disk)
+            {
+                lines.Add(disk);
+            }
+
             lines.Add(Bar(sweep, width, glyphs));
             if (session.Varied.Parameter is not null)
             {
                 lines.Add(VariedLine(session.Varied));
                 lines.Add(BandBar(session.Varied, width, glyphs));
+                lines.Add(BandStepLine(session.Varied));
             }
 
             lines.Add("file: " + SafeText.Visible(Path.GetFileName(plant.Path)));
@@ -69,6 +75,18 @@ public static class ParameterPanelPresenter
             : "nominal " + NumberText.Short(varied.Nominal, 6);
         return $"{varied.Parameter} = {NumberText.Short(varied.Value, 6)}{unit} ({offset})";
     }
+
+    /// <summary>"! file changed on disk", "! file gone from disk", or null while the file is as loaded.</summary>
+    public static string? DiskLine(FileOnDisk disk, Glyphs glyphs) => disk switch
+    {
+        FileOnDisk.Changed => glyphs.Violated + " file changed on disk",
+        FileOnDisk.Missing => glyphs.Violated + " file gone from disk",
+        _ => null,
+    };
+
+    /// <summary>"band step 1/10 = 0.08": how far ↑/↓ move the varied parameter.</summary>
+    public static string BandStepLine(VariedPosition varied) =>
+        $"band step 1/{varied.Divisions} = {NumberText.Short(varied.Step, 4)}";
 
     /// <summary>"0.3 ──●──── 0.65": the band's ends and the varied value's place between them.</summary>
     public static string BandBar(VariedPosition varied, int width, Glyphs glyphs) =>

@@ -140,6 +140,9 @@ internal sealed class WorkbenchScreen : Runnable
             LibraryOverlay => layout.OverlayBox(100, state.Library.Items.Length + 4),
             ValueEntryOverlay => layout.OverlayBox(52, 7),
             SaveOverlay => layout.OverlayBox(76, 10),
+            SaveConflictOverlay => layout.OverlayBox(76, 10),
+            SaveAsOverlay => layout.OverlayBox(76, 10),
+            RecoveryOverlay => layout.OverlayBox(76, 11),
             QuitConfirmOverlay => layout.OverlayBox(72, 6),
             _ => Box.Empty,
         };
@@ -152,6 +155,9 @@ internal sealed class WorkbenchScreen : Runnable
         LibraryOverlay open => PaneContent.Library(State, open.Selected, width, height, glyphs),
         ValueEntryOverlay entry => PaneContent.ValueEntry(State, entry, width, glyphs),
         SaveOverlay dialog => PaneContent.SaveDialog(State, dialog, width, glyphs),
+        SaveConflictOverlay conflict => PaneContent.Marked(FileOverlayPresenter.SaveConflict(State, conflict, width, glyphs), glyphs),
+        SaveAsOverlay box => PaneContent.Marked(FileOverlayPresenter.SaveAs(State, box, width, glyphs), glyphs),
+        RecoveryOverlay recovery => PaneContent.Marked(FileOverlayPresenter.Recovery(State, recovery, width, glyphs), glyphs),
         QuitConfirmOverlay => PaneContent.QuitConfirm(State, width, glyphs),
         _ => [],
     };
@@ -210,7 +216,7 @@ internal sealed class WorkbenchScreen : Runnable
     private static object ResponseInputs(WorkbenchState s) =>
         (s.ShowsResponse, s.Session?.Response, s.Session?.Loaded.Plant.Specs);
 
-    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep, s.Session?.Varied);
+    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep, s.Session?.Varied, s.Session?.Disk);
 
     private static object PoleInputs(WorkbenchState s) =>
         (s.Session?.Poles, s.Session?.SelectedPole, s.Focus, s.Overlay is NoOverlay);
@@ -235,6 +241,10 @@ internal sealed class WorkbenchScreen : Runnable
             LibraryOverlay => "plant library",
             ValueEntryOverlay => "type a value",
             SaveOverlay => "save the operating point",
+            SaveConflictOverlay { Reason: FileOnDisk.Missing } => "the plant file is gone",
+            SaveConflictOverlay => "the plant file changed on disk",
+            SaveAsOverlay => "save under another name",
+            RecoveryOverlay => "recovery file found",
             QuitConfirmOverlay => "quit?",
             _ => string.Empty,
         };
