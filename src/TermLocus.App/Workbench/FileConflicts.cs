@@ -44,7 +44,16 @@ internal static class FileConflicts
 
         var updated = session with { Disk = check.State, SaveAsSuggestion = check.SuggestedPath };
         var message = check.State == session.Disk ? s.Message : Noticed(session, check.State);
-        return Update.Done(s with { Session = updated, Message = message });
+        var state = s with { Session = updated, Message = message };
+        if (s.Overlay is SaveOverlay dialog && check.State != FileOnDisk.AsLoaded)
+        {
+            // The save asked for cannot go into the file as it is: the choice replaces the dialog, keeping what was typed.
+            var conflict = new SaveConflictOverlay(check.State, dialog.Name, dialog.Note, QuitAfter: false, check.SuggestedPath);
+            string what = check.State == FileOnDisk.Missing ? "is gone" : "changed on disk";
+            return Update.Done(state with { Overlay = conflict, Message = StatusMessage.Warning($"not saved: {FileName(session)} {what}") });
+        }
+
+        return Update.Done(state);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Refused(WorkbenchState s, SaveRefused refused)

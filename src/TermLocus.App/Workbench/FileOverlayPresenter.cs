@@ -102,10 +102,10 @@ public static class FileOverlayPresenter
         return Fit(lines, width, glyphs);
     }
 
-    /// <summary>"! plant.toml changed on disk since it was loaded: Enter asks what to do", or null while it is as loaded.</summary>
+    /// <summary>"! plant.toml changed on disk: Enter asks what to do", or null while it is as loaded.</summary>
     public static string? DiskWarning(PlantSession session, Glyphs glyphs) => session.Disk switch
     {
-        FileOnDisk.Changed => $"{glyphs.Violated} {FileName(session.Loaded.Plant.Path)} changed on disk since it was loaded: Enter asks what to do",
+        FileOnDisk.Changed => $"{glyphs.Violated} {FileName(session.Loaded.Plant.Path)} changed on disk: Enter asks what to do",
         FileOnDisk.Missing => $"{glyphs.Violated} {FileName(session.Loaded.Plant.Path)} is gone from disk: Enter asks what to do",
         _ => null,
     };

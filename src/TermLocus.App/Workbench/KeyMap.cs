@@ -87,10 +87,10 @@ public static class KeyMap
         Bind(Command.StepSweepUp, "step the swept value up", S(SpecialKey.Right), K('l'));
         Bind(Command.FinerStep, "finer step", K('['), K('-'));
         Bind(Command.CoarserStep, "coarser step", K(']'), K('+'));
-        Bind(Command.StepBandUp, "move the varied parameter up its band by the band step", S(SpecialKey.Up), K('k'));
+        Bind(Command.StepBandUp, "move the varied parameter up its band (one band step)", S(SpecialKey.Up), K('k'));
         Bind(Command.StepBandDown, "move the varied parameter down its band", S(SpecialKey.Down), K('j'));
-        Bind(Command.FinerBandStep, "finer band step (1/10 of the band to 1/20, 1/50, 1/100)", K('{'), K('<'));
-        Bind(Command.CoarserBandStep, "coarser band step (1/10 of the band to 1/5, 1/2)", K('}'), K('>'));
+        Bind(Command.FinerBandStep, "finer band step: 1/20, 1/50, 1/100 of the band", K('{'), K('<'));
+        Bind(Command.CoarserBandStep, "coarser band step: 1/5, 1/2 of the band", K('}'), K('>'));
         Bind(Command.BandToNominal, "varied parameter back to nominal", K('0'));
         Bind(Command.NextVariedParameter, "vary the next toleranced parameter", K('v'));
         Bind(Command.JumpToRangeStart, "go to the start of the range", S(SpecialKey.Home), K('g'));

@@ -5,8 +5,9 @@ using TermLocus.Core.Plants;
 namespace TermLocus.App.Workbench;
 
 /// <summary>
-/// The parameter panel: the plant's title, the swept parameter with its value and unit, the step, whether the value
-/// is saved, where it stands in its range as a small bar, then (given room) the file, the specs and the note.
+/// The parameter panel: the plant's title, the swept parameter with its value and unit, the step (and the band step),
+/// whether the value is saved and whether the file changed on disk, where it stands in its range as a small bar, the
+/// varied parameter and its band, then (given room) the file, the specs and the note.
 /// Short lines, most important first, so a narrow side panel shows what matters.
 /// </summary>
 public static class ParameterPanelPresenter
@@ -27,7 +28,12 @@ public static class ParameterPanelPresenter
             var sweep = session.Sweep;
             lines.Add(plant.Title.Length > 0 ? SafeText.Visible(plant.Title) : SafeText.Visible(Path.GetFileName(plant.Path)));
             lines.Add(ValueLine(sweep));
-            lines.Add("step " + NumberText.Exact(sweep.Step));
+            string step = "step " + NumberText.Exact(sweep.Step);
+            string? bandStep = session.Varied.Parameter is null ? null : BandStepLine(session.Varied);
+            // The band step shares the step line when it fits (a short panel keeps its specs); else it gets its own.
+            string? shared = bandStep is null ? null
+                : new[] { $"{step}   {bandStep}", $"{step}   band step 1/{session.Varied.Divisions}" }.FirstOrDefault(l => TextWidth.Of(l) <= width);
+            lines.Add(shared ?? step);
             lines.Add(sweep.Unsaved ? $"{glyphs.Violated} unsaved (file: {NumberText.Exact(sweep.SavedValue)})" : "saved in the file");
             if (DiskLine(session.Disk, glyphs) is { } disk)
             {
@@ -39,7 +45,10 @@ public static class ParameterPanelPresenter
             {
                 lines.Add(VariedLine(session.Varied));
                 lines.Add(BandBar(session.Varied, width, glyphs));
-                lines.Add(BandStepLine(session.Varied));
+                if (shared is null)
+                {
+                    lines.Add(bandStep!);
+                }
             }
 
             lines.Add("file: " + SafeText.Visible(Path.GetFileName(plant.Path)));

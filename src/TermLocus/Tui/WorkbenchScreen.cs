@@ -140,14 +140,21 @@ internal sealed class WorkbenchScreen : Runnable
             LibraryOverlay => layout.OverlayBox(100, state.Library.Items.Length + 4),
             ValueEntryOverlay => layout.OverlayBox(52, 7),
             SaveOverlay => layout.OverlayBox(76, 10),
-            SaveConflictOverlay => layout.OverlayBox(76, 10),
-            SaveAsOverlay => layout.OverlayBox(76, 10),
-            RecoveryOverlay => layout.OverlayBox(76, 11),
+            // Boxes about files are as tall as their words at the width they get, frame included.
+            SaveConflictOverlay c => FileBox(FileOverlayPresenter.SaveConflict(state, c, FileBoxInner(), glyphs).Length),
+            SaveAsOverlay b => FileBox(FileOverlayPresenter.SaveAs(state, b, FileBoxInner(), glyphs).Length),
+            RecoveryOverlay r => FileBox(FileOverlayPresenter.Recovery(state, r, FileBoxInner(), glyphs).Length),
             QuitConfirmOverlay => layout.OverlayBox(72, 6),
             _ => Box.Empty,
         };
         PlaceAt(overlay, box);
     }
+
+    private const int FileBoxWidth = 76;
+
+    private int FileBoxInner() => Math.Max(1, Math.Min(FileBoxWidth, layout.Screen.Width - 4) - 2);
+
+    private Box FileBox(int lines) => layout.OverlayBox(FileBoxWidth, lines + 2);
 
     private IReadOnlyList<StyledLine> OverlayContent(int width, int height) => State.Overlay switch
     {

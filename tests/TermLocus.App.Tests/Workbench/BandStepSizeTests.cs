@@ -81,11 +81,17 @@ public class BandStepSizeTests
     public void The_parameter_panel_shows_the_band_step()
     {
         var state = Update.Apply(Opened(), Command.FinerBandStep).State;
-        var lines = ParameterPanelPresenter.Lines(state.Session, 36, 12, Glyphs.Unicode).Select(l => l.TrimEnd()).ToList();
-        int varied = lines.IndexOf("a = 2 1/s (nominal)");
-        Assert.True(varied > 0, string.Join('\n', lines));
-        Assert.Equal("band step 1/20 = 0.04", lines[varied + 2]);
+        // On the step line when it fits (a short panel keeps its specs), shorter or on a line of its own when not.
+        Assert.Equal("step 0.2   band step 1/20 = 0.04", Panel(state, 36)[2]);
+        Assert.Equal("step 0.2   band step 1/20", Panel(state, 28)[2]);
+        var narrow = Panel(state, 22);
+        Assert.Equal("step 0.2", narrow[2]);
+        Assert.Equal("band step 1/20 = 0.04", narrow[narrow.IndexOf("a = 2 1/s (nominal)") + 2]);
+        Assert.Equal("step 0.2", Panel(TestPlants.Opened(), 36)[2]); // nothing toleranced, no band step
     }
+
+    private static List<string> Panel(WorkbenchState state, int width) =>
+        ParameterPanelPresenter.Lines(state.Session, width, 14, Glyphs.Unicode).Select(l => l.TrimEnd()).ToList();
 
     [Fact]
     public void Help_and_hints_name_the_band_step_keys()

@@ -65,15 +65,22 @@ public class FileConflictUpdateTests
     }
 
     [Fact]
-    public void Enter_in_the_dialog_after_the_file_changed_offers_the_choice_with_the_typed_name()
+    public void A_check_finding_the_file_changed_while_the_dialog_is_open_turns_it_into_the_choice()
     {
         var dialog = Update.Apply(FilePlants.Unsaved(), Command.SaveOperatingPoint).State;
         dialog = FilePlants.Type(dialog, " bench");
-        dialog = FilePlants.Checked(dialog, FileOnDisk.Changed); // the check comes back while the dialog is open
-        Assert.IsType<SaveOverlay>(dialog.Overlay);
+        var state = FilePlants.Checked(dialog, FileOnDisk.Changed); // the check asked for by s comes back
+        Assert.Equal(new SaveConflictOverlay(FileOnDisk.Changed, "K = 5.2 bench", SaveOverlay.DefaultNote, false, Suggested), state.Overlay);
+        Assert.IsType<SaveOverlay>(FilePlants.Checked(dialog, FileOnDisk.AsLoaded).Overlay); // as loaded: the dialog stays
+    }
+
+    [Fact]
+    public void Enter_in_the_dialog_when_the_file_is_known_changed_offers_the_choice_and_writes_nothing()
+    {
+        var dialog = Update.Apply(FilePlants.Unsaved(), Command.SaveOperatingPoint).State;
+        dialog = dialog with { Session = dialog.Session! with { Disk = FileOnDisk.Changed } };
         var (state, effects) = Update.Apply(dialog, Command.Confirm);
-        var conflict = Assert.IsType<SaveConflictOverlay>(state.Overlay);
-        Assert.Equal("K = 5.2 bench", conflict.Name);
+        Assert.Equal("K = 5.2", Assert.IsType<SaveConflictOverlay>(state.Overlay).Name);
         Assert.DoesNotContain(effects, e => e is SaveOperatingPointEffect);
     }
 

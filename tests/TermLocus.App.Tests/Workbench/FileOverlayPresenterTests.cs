@@ -119,7 +119,7 @@ public class FileOverlayPresenterTests
 
         var dialog = changed with { Overlay = new SaveOverlay("K = 5.2", "n", false) };
         var lines = Trimmed(OverlayPresenter.SaveDialog(dialog, (SaveOverlay)dialog.Overlay, Width, Glyphs.Unicode));
-        Assert.Contains("! second.toml changed on disk since it was loaded: Enter asks what to do", lines);
+        Assert.Contains("! second.toml changed on disk: Enter asks what to do", lines);
     }
 
     [Fact]
