@@ -34,6 +34,13 @@ internal static class Arrivals
         return loaded.Model is null ? (state, effects) : (state, effects.Add(new DesignEffect(loaded)));
     }
 
+    /// <summary>A save that failed: the file is unchanged, the value still unsaved.</summary>
+    public static (WorkbenchState, ImmutableArray<Effect>) SaveFailed(WorkbenchState s, OperatingPointSaveFailed failed) => Update.Done(s with
+    {
+        Session = s.Session is { } session ? session with { SaveInFlight = false } : null,
+        Message = StatusMessage.Error("not saved: " + SafeText.Visible(failed.Problem)),
+    });
+
     /// <summary>A plant file that failed to load; when it was the open one being read again, the session stays.</summary>
     public static (WorkbenchState, ImmutableArray<Effect>) PlantLoadFailed(WorkbenchState s, PlantLoadFailed failed)
     {
@@ -148,6 +155,7 @@ internal static class Arrivals
             Sweep = session.Sweep with { SavedValue = saved.Value },
             Disk = FileOnDisk.AsLoaded,
             SaveAsSuggestion = null,
+            SaveInFlight = false,
         };
         string file = SafeText.Visible(Path.GetFileName(saved.Plant.Path));
         string what = $"saved {session.Sweep.Name} = {NumberText.Exact(saved.Value)} to {file}";

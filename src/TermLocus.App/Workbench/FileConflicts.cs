@@ -36,7 +36,8 @@ internal static class FileConflicts
     public static (WorkbenchState, ImmutableArray<Effect>) Checked(WorkbenchState s, PlantFileChecked check)
     {
         // A check made against bytes since replaced by our own save says nothing about the file now.
-        if (s.Session is not { Loaded.Document: { } document } session || session.Loaded.Plant.Path != check.Path
+        // While our own save runs, the file changes under our hands; its outcome says how the file ends up.
+        if (s.Session is not { Loaded.Document: { } document, SaveInFlight: false } session || session.Loaded.Plant.Path != check.Path
             || !document.Sha256.AsSpan().SequenceEqual(check.ExpectedSha256.AsSpan()))
         {
             return Update.Done(s);
@@ -72,13 +73,14 @@ internal static class FileConflicts
             string problem = $"{SafeText.Visible(Path.GetFileName(target))} exists already; type another name";
             return Update.Done(s with
             {
+                Session = session with { SaveInFlight = false },
                 Overlay = new SaveAsOverlay(target, name, note, request.QuitAfter, problem),
                 Message = StatusMessage.Warning("not saved: " + SafeText.Visible(refused.Problem)),
             });
         }
 
         var disk = refused.Reason == SaveRefusal.FileMissing ? FileOnDisk.Missing : FileOnDisk.Changed;
-        var updated = session with { Disk = disk, SaveAsSuggestion = refused.SuggestedPath };
+        var updated = session with { Disk = disk, SaveAsSuggestion = refused.SuggestedPath, SaveInFlight = false };
         return Update.Done(s with
         {
             Session = updated,

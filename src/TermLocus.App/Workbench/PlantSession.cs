@@ -58,6 +58,9 @@ public sealed record PlantSession(
     /// <summary>How the plant file on disk compares with the bytes loaded, as last checked.</summary>
     public FileOnDisk Disk { get; init; } = FileOnDisk.AsLoaded;
 
+    /// <summary>True from asking for a save until its outcome arrives: our own write is not news about the file.</summary>
+    public bool SaveInFlight { get; init; }
+
     /// <summary>A free file name beside the plant file for a save under another name, as last checked; null until checked.</summary>
     public string? SaveAsSuggestion { get; init; }
 

@@ -66,7 +66,11 @@ internal static class Saving
             Mode = mode,
             TargetPath = target,
         };
-        return (s with { Message = StatusMessage.Info($"saving {sweep.Name} = {NumberText.Exact(sweep.Value)}{where}") }, [save]);
+        return (s with
+        {
+            Session = session with { SaveInFlight = true },
+            Message = StatusMessage.Info($"saving {sweep.Name} = {NumberText.Exact(sweep.Value)}{where}"),
+        }, [save]);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Quit(WorkbenchState s) =>

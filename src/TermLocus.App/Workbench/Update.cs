@@ -75,10 +75,7 @@ public static class Update
             LocusTraced m => Arrivals.LocusTraced(state, m.Analysis),
             LocusTraceFailed m => Arrivals.LocusTraceFailed(state, m),
             OperatingPointSaved m => Arrivals.Saved(state, m),
-            OperatingPointSaveFailed m => Done(state with
-            {
-                Message = StatusMessage.Error("not saved: " + Text.SafeText.Visible(m.Problem)),
-            }),
+            OperatingPointSaveFailed m => Arrivals.SaveFailed(state, m),
             SaveRefused m => FileConflicts.Refused(state, m),
             PlantFileTouched m => FileConflicts.Touched(state, m),
             PlantFileChecked m => FileConflicts.Checked(state, m),

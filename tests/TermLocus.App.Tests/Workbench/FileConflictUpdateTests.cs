@@ -52,6 +52,19 @@ public class FileConflictUpdateTests
     }
 
     [Fact]
+    public void Checks_are_ignored_while_our_own_save_runs_and_heeded_again_once_it_is_back()
+    {
+        var dialog = Update.Apply(FilePlants.Unsaved(), Command.SaveOperatingPoint).State;
+        var saving = Update.Apply(dialog, Command.Confirm).State;
+        Assert.True(saving.Session!.SaveInFlight);
+        Assert.Equal(FileOnDisk.AsLoaded, FilePlants.Checked(saving, FileOnDisk.Changed).Session!.Disk); // our own rename
+        var failed = Update.Receive(saving, new OperatingPointSaveFailed("disk full")).State;
+        Assert.False(failed.Session!.SaveInFlight);
+        Assert.Equal("not saved: disk full", failed.Message!.Text);
+        Assert.Equal(FileOnDisk.Changed, FilePlants.Checked(failed, FileOnDisk.Changed).Session!.Disk);
+    }
+
+    [Fact]
     public void S_on_a_changed_file_offers_reading_it_again_saving_under_another_name_or_cancelling()
     {
         var changed = FilePlants.Checked(FilePlants.Unsaved(), FileOnDisk.Changed);
