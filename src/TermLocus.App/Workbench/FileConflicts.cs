@@ -44,17 +44,20 @@ internal static class FileConflicts
         }
 
         var updated = session with { Disk = check.State, SaveAsSuggestion = check.SuggestedPath };
-        var message = check.State == session.Disk ? s.Message : Noticed(session, check.State);
+        bool news = check.State != session.Disk;
+        var message = news ? Noticed(session, check.State) : s.Message;
         var state = s with { Session = updated, Message = message };
+        // The library pane lists the file and its verdict: read the folder again when the file came or went or changed.
+        ImmutableArray<Effect> effects = news && s.Library.Folder is { } folder ? [new ScanLibraryEffect(folder)] : [];
         if (s.Overlay is SaveOverlay dialog && check.State != FileOnDisk.AsLoaded)
         {
             // The save asked for cannot go into the file as it is: the choice replaces the dialog, keeping what was typed.
             var conflict = new SaveConflictOverlay(check.State, dialog.Name, dialog.Note, QuitAfter: false, check.SuggestedPath);
             string what = check.State == FileOnDisk.Missing ? "is gone" : "changed on disk";
-            return Update.Done(state with { Overlay = conflict, Message = StatusMessage.Warning($"not saved: {FileName(session)} {what}") });
+            return (state with { Overlay = conflict, Message = StatusMessage.Warning($"not saved: {FileName(session)} {what}") }, effects);
         }
 
-        return Update.Done(state);
+        return (state, effects);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Refused(WorkbenchState s, SaveRefused refused)

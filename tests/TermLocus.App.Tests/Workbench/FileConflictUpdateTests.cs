@@ -34,8 +34,12 @@ public class FileConflictUpdateTests
         Assert.Equal(MessageKind.Warning, changed.Message!.Kind);
         Assert.Equal("second.toml changed on disk; s lets you choose what to do", changed.Message.Text);
 
-        var quiet = FilePlants.Checked(changed with { Message = null }, FileOnDisk.Changed);
+        var check = new PlantFileChecked(FilePlants.Path, FilePlants.Sha(changed), FileOnDisk.Changed, Suggested);
+        var (quiet, effects) = Update.Receive(changed with { Message = null }, check);
         Assert.Null(quiet.Message); // the same news is not repeated on every touch
+        Assert.Empty(effects);
+        var news = new PlantFileChecked(FilePlants.Path, FilePlants.Sha(changed), FileOnDisk.Missing, Suggested);
+        Assert.Equal<Effect>([new ScanLibraryEffect(TestPlants.Folder)], Update.Receive(quiet, news).Effects); // the library pane follows
         var gone = FilePlants.Checked(quiet, FileOnDisk.Missing);
         Assert.Equal("second.toml is gone from disk; s lets you choose what to do", gone.Message!.Text);
         var back = FilePlants.Checked(gone, FileOnDisk.AsLoaded);
