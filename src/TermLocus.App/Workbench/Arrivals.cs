@@ -163,21 +163,8 @@ internal static class Arrivals
         effects.AddRange(Recovering.AfterSave(session, saved.Plant.Path));
         if (saved.Plant.Path != before)
         {
-            // Saved under another name: that file is the one open now, and the library has one more file. Results are
-            // keyed by the file; the locus is the same loop's, so it is kept under the new name rather than traced again.
-            if (session.LocusIsCurrent && session.CurrentLoop is null)
-            {
-                updated = updated with { Locus = session.Locus! with { Key = updated.Loop.Key } };
-            }
-
-            var (rekeyed, recomputed) = Recompute.Session(updated, s.ShowsResponse);
-            updated = rekeyed;
-            effects.AddRange(recomputed);
+            updated = MovedTo(s, session, updated, effects);
             what += ", now the open file";
-            if (s.Library.Folder is { } folder)
-            {
-                effects.Add(new ScanLibraryEffect(folder));
-            }
         }
         else if (effects.Count > 0)
         {
@@ -191,6 +178,25 @@ internal static class Arrivals
         }
 
         return (state, effects.ToImmutable());
+    }
+
+    // Saved under another name: that file is the one open now, and the library has one more file. Results are keyed by
+    // the file; the locus is the same loop's, so it is kept under the new name rather than traced again.
+    private static PlantSession MovedTo(WorkbenchState s, PlantSession before, PlantSession moved, ImmutableArray<Effect>.Builder effects)
+    {
+        if (before.LocusIsCurrent && before.CurrentLoop is null)
+        {
+            moved = moved with { Locus = before.Locus! with { Key = moved.Loop.Key } };
+        }
+
+        var (rekeyed, recomputed) = Recompute.Session(moved, s.ShowsResponse);
+        effects.AddRange(recomputed);
+        if (s.Library.Folder is { } folder)
+        {
+            effects.Add(new ScanLibraryEffect(folder));
+        }
+
+        return rekeyed;
     }
 
     /// <summary>The trace inputs of what the session shows now (the varied parameter at its place in the band).</summary>

@@ -258,6 +258,20 @@ public class FileConflictUpdateTests
     }
 
     [Fact]
+    public void Saved_under_another_name_the_locus_shown_stays_current_without_tracing_again()
+    {
+        var unsaved = FilePlants.Unsaved();
+        var key = unsaved.Session!.Loop.Key;
+        var traced = Update.Receive(unsaved, new LocusTraced(new LocusAnalysis(key, [TestPlants.RealBranch(0, 1, 0, -1)], []))).State;
+        Assert.True(traced.Session!.LocusIsCurrent);
+        var written = FilePlants.SecondOrder("# as saved\n", Suggested);
+        var (state, effects) = Update.Receive(traced, new OperatingPointSaved(written.Plant, written.Document, 5.2, QuitAfter: false));
+        Assert.True(state.Session!.LocusIsCurrent); // the trace key names the file; the same loop's locus is kept
+        Assert.Equal(Suggested, state.Session.Loop.Key.PlantPath);
+        Assert.DoesNotContain(effects, e => e is TraceLocusEffect);
+    }
+
+    [Fact]
     public void Cancel_writes_nothing_and_says_so()
     {
         var conflict = FilePlants.Run(FilePlants.Checked(FilePlants.Unsaved(), FileOnDisk.Changed), Command.SaveOperatingPoint).State;
