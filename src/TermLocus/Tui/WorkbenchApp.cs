@@ -86,6 +86,7 @@ public static class WorkbenchApp
         var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
         using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);
         KeyRouter.Install(app, controller, screen);
+        using var watch = new PlantFileWatch(controller, action => app.Invoke(action));
         using var signals = new SignalGuard(
             stop: code =>
             {
