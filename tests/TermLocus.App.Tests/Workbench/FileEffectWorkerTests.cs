@@ -136,6 +136,8 @@ public sealed class FileEffectWorkerTests : IDisposable
     public void A_recovery_file_older_than_the_plant_is_found_stale()
     {
         Assert.Null(worker.Perform(new SaveRecoveryEffect(Load(), 9, "v")));
+        // Both times set: a copied plant keeps its source's time, which may be older than two hours.
+        File.SetLastWriteTimeUtc(Conveyor, DateTime.UtcNow);
         File.SetLastWriteTimeUtc(Recovery, DateTime.UtcNow.AddHours(-2));
         var recovery = Assert.IsType<PlantLoaded>(worker.Perform(new LoadPlantEffect(Conveyor))).Recovery!;
         Assert.True(recovery.Stale);
