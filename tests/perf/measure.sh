@@ -5,7 +5,7 @@
 #   TERMLOCUS_AOT_BIN=path tests/perf/measure.sh [measure.py options]   measure an existing binary
 # Needs python3, tmux and /usr/bin/time (Debian package `time`). Extra arguments go to measure.py
 # (--runs, --steps, --idle, --plant, --json FILE, --strict, --nice N). The idle-CPU floor comes from
-# tests/perf/PollFloor, published here too: Terminal.Gui 2.5's two idle waits and nothing else.
+# tests/perf/PollFloor, published here too: the idle workbench's waits and nothing else.
 set -euo pipefail
 root=$(cd "$(dirname "$0")/../.." && pwd)
 for tool in python3 tmux /usr/bin/time; do

@@ -1,14 +1,21 @@
 using System.Collections.Immutable;
 using TermLocus.App.Canvas;
+using TermLocus.Core.Time;
 
 namespace TermLocus.App.Plot;
 
 /// <summary>
 /// A step response drawn on a dot canvas: the response, the ±2 % band about the steady state (dotted), the peak
-/// marked, and time and value ticks. Shared by <c>termlocus response</c> and the workbench's response pane.
+/// marked, and time and value ticks; for a sampled loop also the sample instants, each a glyph on the curve, when
+/// they lie far enough apart to tell. Shared by <c>termlocus response</c> and the workbench's response pane.
 /// </summary>
 public static class ResponsePlot
 {
+    /// <summary>Sample instants are marked only when at least this many character columns apart.</summary>
+    public const double MinimumMarkSpacingColumns = 2.0;
+
+    private const int LabelWidth = 7;
+
     /// <summary>
     /// The plot of <paramref name="outputs"/> against <paramref name="times"/> (seconds, increasing, same length,
     /// at least 2) in a <paramref name="columns"/> × <paramref name="rows"/> area (at least 10 × 4).
@@ -17,12 +24,21 @@ public static class ResponsePlot
     /// </summary>
     public static IReadOnlyList<string> Render(
         IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState, double? peakTime,
-        int columns, int rows, CanvasSymbols symbols)
+        int columns, int rows, CanvasSymbols symbols) =>
+        Render(times, outputs, steadyState, peakTime, columns, rows, symbols, null);
+
+    /// <summary>
+    /// As the other overload, with the sample instants <paramref name="samples"/> (times on the same axis, null for
+    /// none) marked on the curve ('•', or 'o' in ASCII) when <see cref="MarksSamples"/> says they can be told apart.
+    /// The peak marker wins a cell both want.
+    /// </summary>
+    public static IReadOnlyList<string> Render(
+        IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState, double? peakTime,
+        int columns, int rows, CanvasSymbols symbols, ResponseTrace? samples)
     {
         ArgumentOutOfRangeException.ThrowIfLessThan(columns, 10);
         ArgumentOutOfRangeException.ThrowIfLessThan(rows, 4);
-        const int labelWidth = 7;
-        var canvas = new DotCanvas(columns - labelWidth, rows - 1, symbols);
+        var canvas = new DotCanvas(columns - LabelWidth, rows - 1, symbols);
         double t0 = times[0], t1 = Math.Max(times[^1], t0 + 1e-12);
         var finite = outputs.Where(double.IsFinite).ToArray();
         double lo = Math.Min(0.0, finite.Length > 0 ? finite.Min() : 0.0);
@@ -45,6 +61,11 @@ public static class ResponsePlot
         }
 
         DrawTrace(canvas, times, outputs, X, Y);
+        if (samples is not null && MarksSamples(samples, times, columns))
+        {
+            MarkSamples(canvas, samples, X, Y);
+        }
+
         if (peakTime is double tp && steadyState is not null)
         {
             int i = Nearest(times, tp);
@@ -52,7 +73,37 @@ public static class ResponsePlot
                 symbols == CanvasSymbols.Braille ? '◆' : '@', new CellTag(CellLayer.Marker));
         }
 
-        return Frame(canvas.Lines(), lo, hi, t0, t1, columns, labelWidth);
+        return Frame(canvas.Lines(), lo, hi, t0, t1, columns, LabelWidth);
+    }
+
+    /// <summary>
+    /// True when the instants of <paramref name="samples"/> lie at least <see cref="MinimumMarkSpacingColumns"/>
+    /// columns apart on a plot of <paramref name="times"/> <paramref name="columns"/> wide (value labels included).
+    /// </summary>
+    public static bool MarksSamples(ResponseTrace samples, IReadOnlyList<double> times, int columns)
+    {
+        ArgumentNullException.ThrowIfNull(samples);
+        ArgumentNullException.ThrowIfNull(times);
+        if (samples.Count < 2 || times.Count < 2 || columns <= LabelWidth)
+        {
+            return false;
+        }
+
+        double span = times[^1] - times[0];
+        double spacing = (samples.Times[1] - samples.Times[0]) / span * (columns - LabelWidth);
+        return span > 0.0 && spacing >= MinimumMarkSpacingColumns;
+    }
+
+    private static void MarkSamples(DotCanvas canvas, ResponseTrace samples, Func<double, int> x, Func<double, int> y)
+    {
+        char dot = canvas.Symbols == CanvasSymbols.Braille ? '•' : 'o';
+        for (int k = 0; k < samples.Count; k++)
+        {
+            if (double.IsFinite(samples.Outputs[k]))
+            {
+                canvas.PutGlyph(x(samples.Times[k]) / canvas.DotsPerColumn, y(samples.Outputs[k]) / canvas.DotsPerRow, dot, new CellTag(CellLayer.CurrentPole));
+            }
+        }
     }
 
     private static void DrawTrace(DotCanvas canvas, IReadOnlyList<double> times, IReadOnlyList<double> outputs, Func<double, int> x, Func<double, int> y)

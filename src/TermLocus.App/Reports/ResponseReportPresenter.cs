@@ -6,10 +6,15 @@ using TermLocus.Core.Time;
 
 namespace TermLocus.App.Reports;
 
-/// <summary>The figures of a closed-loop step response beside the dominant-pair estimates, so a misleading estimate shows.</summary>
+/// <summary>
+/// The figures of a closed-loop step response beside the dominant-pair estimates, so a misleading estimate shows. For
+/// a sampled loop simulated between samples a third column gives the figures of the sample instants alone, so an
+/// overshoot the samples miss shows too.
+/// </summary>
 public static class ResponseReportPresenter
 {
-    /// <summary>Figure lines (no plot): steady state, rise, peak, overshoot, settling, each measured and estimated.</summary>
+    /// <summary>Figure lines (no plot): steady state, rise, peak, overshoot, settling, each measured (between samples and at
+    /// them, for a sampled loop) and estimated.</summary>
     public static ImmutableArray<string> Lines(LoopResponse response, Glyphs g)
     {
         ArgumentNullException.ThrowIfNull(response);
@@ -25,15 +30,8 @@ public static class ResponseReportPresenter
             lines.Add($"the closed loop is unstable {g.Violated}: no steady state, and no figures");
         }
 
-        var f = response.Figures;
         var e = response.Estimate;
-        lines.Add($"{"figure",-22}{"simulated",12}{"2nd-order estimate",20}");
-        lines.Add(Row("steady state", response.SteadyState, null));
-        lines.Add(Row("overshoot %", f?.OvershootPct, e?.OvershootPct));
-        lines.Add(Row("rise time 10-90 % s", f?.RiseTimeSeconds, null));
-        lines.Add(Row("peak time s", f?.PeakTimeSeconds, e?.PeakTimeSeconds));
-        lines.Add(Row("settling 2 % s", f?.SettlingTime2PctSeconds, e?.SettlingTime2PctSeconds));
-        lines.Add(Row("settling 5 % s", f?.SettlingTime5PctSeconds, e?.SettlingTime5PctSeconds));
+        lines.AddRange(response.Method == ResponseMethod.SampledBetweenSamples ? SampledTable(response) : Table(response));
         if (e is not null)
         {
             lines.Add($"estimates from the dominant pole(s) {string.Join(", ", e.Poles.Where(p => p.Imaginary >= 0).Select(p => SpecWording.Location(p, g)))}"
@@ -48,8 +46,40 @@ public static class ResponseReportPresenter
         return lines.ToImmutable();
     }
 
+    private static IEnumerable<string> Table(LoopResponse response)
+    {
+        var f = response.Figures;
+        var e = response.Estimate;
+        yield return $"{"figure",-22}{"simulated",12}{"2nd-order estimate",20}";
+        yield return Row("steady state", response.SteadyState, null);
+        yield return Row("overshoot %", f?.OvershootPct, e?.OvershootPct);
+        yield return Row("rise time 10-90 % s", f?.RiseTimeSeconds, null);
+        yield return Row("peak time s", f?.PeakTimeSeconds, e?.PeakTimeSeconds);
+        yield return Row("settling 2 % s", f?.SettlingTime2PctSeconds, e?.SettlingTime2PctSeconds);
+        yield return Row("settling 5 % s", f?.SettlingTime5PctSeconds, e?.SettlingTime5PctSeconds);
+    }
+
+    // A sampled loop simulated between samples: the plant output's figures beside those of the sample instants alone.
+    private static IEnumerable<string> SampledTable(LoopResponse response)
+    {
+        var f = response.Figures;
+        var k = response.SampleFigures;
+        var e = response.Estimate;
+        yield return $"{"figure",-20}{"simulated",11}{"at samples",12}{"estimate",11}";
+        yield return Row("steady state", response.SteadyState, response.SteadyState, null);
+        yield return Row("overshoot %", f?.OvershootPct, k?.OvershootPct, e?.OvershootPct);
+        yield return Row("rise time 10-90 % s", f?.RiseTimeSeconds, k?.RiseTimeSeconds, null);
+        yield return Row("peak time s", f?.PeakTimeSeconds, k?.PeakTimeSeconds, e?.PeakTimeSeconds);
+        yield return Row("settling 2 % s", f?.SettlingTime2PctSeconds, k?.SettlingTime2PctSeconds, e?.SettlingTime2PctSeconds);
+        yield return Row("settling 5 % s", f?.SettlingTime5PctSeconds, k?.SettlingTime5PctSeconds, e?.SettlingTime5PctSeconds);
+        yield return $"simulated between samples, {response.PointsPerSample} points a sample";
+    }
+
     private static string Row(string name, double? simulated, double? estimate) =>
         $"{name,-22}{Show(simulated),12}{Show(estimate),20}";
+
+    private static string Row(string name, double? simulated, double? atSamples, double? estimate) =>
+        $"{name,-20}{Show(simulated),11}{Show(atSamples),12}{Show(estimate),11}";
 
     private static string Show(double? value) => value is double v ? NumberText.Significant(v) : "-";
 }

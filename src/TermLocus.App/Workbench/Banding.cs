@@ -4,8 +4,8 @@ using TermLocus.App.Text;
 namespace TermLocus.App.Workbench;
 
 /// <summary>
-/// Commands that move the varied (toleranced) parameter through its band: a tenth of the band a step, back to
-/// nominal, or on to the next toleranced parameter. The swept value stays; the poles, the band figures and the locus
+/// Commands that move the varied (toleranced) parameter through its band: a step (a tenth of the band at first, finer
+/// or coarser on request), back to nominal, or on to the next toleranced parameter. The swept value stays; the poles, the band figures and the locus
 /// follow.
 /// </summary>
 internal static class Banding
@@ -71,11 +71,46 @@ internal static class Banding
             return Update.Say(s, StatusMessage.Info($"{next.Name} is the only toleranced parameter"));
         }
 
-        // The parameter left goes back to nominal: one parameter is varied at a time.
-        var varied = VariedPosition.AtNominal(next);
+        // The parameter left goes back to nominal: one parameter is varied at a time. The step size chosen stays.
+        var varied = VariedPosition.AtNominal(next) with { Divisions = session.Varied.Divisions };
         return MoveTo(s, varied, StatusMessage.Info(
             $"varying {next.Name} over {NumberText.Short(varied.Band.Low, 6)} .. {NumberText.Short(varied.Band.High, 6)}; " +
             $"{session.Varied.Parameter} back to nominal"));
+    }
+
+    public static (WorkbenchState, ImmutableArray<Effect>) ChangeStep(WorkbenchState s, bool finer)
+    {
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        var varied = session.Varied;
+        if (varied.Parameter is null)
+        {
+            return Update.Say(s, StatusMessage.Info(NoBand(session)));
+        }
+
+        int divisions = varied.NextDivisions(finer);
+        if (divisions == varied.Divisions)
+        {
+            return Update.Say(s, StatusMessage.Warning(
+                $"{(finer ? "finest" : "coarsest")} band step already: {StepWords(varied)}"));
+        }
+
+        var changed = varied with { Divisions = divisions };
+        return Update.Done(s with
+        {
+            Session = session with { Varied = changed },
+            Message = StatusMessage.Info($"{varied.Parameter} now steps {StepWords(changed)}"),
+        });
+    }
+
+    /// <summary>"1/20 of its band (0.04 1/s)": the band step as a fraction and as a value.</summary>
+    public static string StepWords(VariedPosition varied)
+    {
+        string unit = varied.Unit.Length > 0 ? " " + SafeText.Visible(varied.Unit) : string.Empty;
+        return $"1/{varied.Divisions} of its band ({NumberText.Short(varied.Step, 4)}{unit})";
     }
 
     private static (WorkbenchState, ImmutableArray<Effect>) MoveTo(WorkbenchState s, VariedPosition varied, StatusMessage? message)

@@ -18,11 +18,17 @@ public enum Command
     /// <summary>Make the step one notch (1-2-5 series) larger.</summary>
     CoarserStep,
 
-    /// <summary>Move the varied (toleranced) parameter a tenth of its band down.</summary>
+    /// <summary>Move the varied (toleranced) parameter one band step down (a tenth of its band at first).</summary>
     StepBandDown,
 
-    /// <summary>Move the varied parameter a tenth of its band up.</summary>
+    /// <summary>Move the varied parameter one band step up.</summary>
     StepBandUp,
+
+    /// <summary>Make the band step finer: the band split in more steps (2, 5, 10, 20, 50, 100).</summary>
+    FinerBandStep,
+
+    /// <summary>Make the band step coarser: the band split in fewer steps.</summary>
+    CoarserBandStep,
 
     /// <summary>Put the varied parameter back to its nominal value.</summary>
     BandToNominal,
@@ -92,6 +98,21 @@ public enum Command
 
     /// <summary>Put the swept value back to the value saved in the plant file.</summary>
     RevertToSavedValue,
+
+    /// <summary>Answer to a refused save: read the plant file again from disk, keeping the swept value.</summary>
+    ReloadFromDisk,
+
+    /// <summary>Answer to a refused save: save the plant with the value under another file name.</summary>
+    SaveUnderAnotherName,
+
+    /// <summary>Answer to a save refused because the plant file is gone: write it again at the same path.</summary>
+    WriteFileAgain,
+
+    /// <summary>Answer to a recovery file found on opening: take its value as an unsaved value.</summary>
+    ApplyRecovery,
+
+    /// <summary>Answer to a recovery file found on opening: delete it.</summary>
+    DiscardRecovery,
 
     /// <summary>Delete the last typed character in the value box.</summary>
     DeleteBackward,

@@ -80,40 +80,6 @@ internal static partial class CoreBridge
         return new LocusAnalysis(key, study.Trace.Branches.Select(b => b.Points).ToImmutableArray(), marks);
     }
 
-    /// <summary>Writes the value and an operating point into the plant file; returns the file as now on disk.</summary>
-    /// <exception cref="IOException">The save was refused or failed (the message says why); the file is unchanged.</exception>
-    /// <param name="loaded">The plant as read.</param>
-    /// <param name="value">The swept value.</param>
-    /// <param name="verdict">The verdict line, or null to run the band check for it here.</param>
-    /// <param name="context">Time and user.</param>
-    /// <param name="name">The operating point's name, or null for "name = value".</param>
-    /// <param name="note">Its note, or null for the default.</param>
-    public static PlantDocument SaveOperatingPoint(
-        LoadedPlant loaded, double value, string? verdict, SaveContext context, string? name = null, string? note = null)
-    {
-        var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
-        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context, name, note));
-        var result = AtomicFileSaver.TrySave(document, bytes);
-        if (!result.Succeeded)
-        {
-            throw new IOException(result.Message);
-        }
-
-        return PlantFileReader.ReadDocument(document.Path);
-    }
-
-    /// <summary>Writes what saving would write to <c>&lt;plant&gt;.recovery</c>; the plant file is not touched.</summary>
-    public static string WriteRecovery(LoadedPlant loaded, double value, string? verdict, SaveContext context)
-    {
-        var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
-        var bytes = OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context, null, null));
-        string target = SaveRecoveryEffect.RecoveryPathFor(document.Path);
-        string temporary = target + ".tmp";
-        File.WriteAllBytes(temporary, bytes);
-        File.Move(temporary, target, overwrite: true);
-        return target;
-    }
-
     /// <summary>Builds the loop of a plant not read from a file (nothing to save into). Throws <see cref="PlantFileException"/>.</summary>
     public static LoadedPlant FromPlant(Plant plant) => Build(plant, null);
 
@@ -151,6 +117,12 @@ internal static partial class CoreBridge
             string problem = e is PlantFileException p ? p.Error.ToString() : $"{entry.FileName}: error: {e.Message}";
             return new LibraryItem(entry.Path, entry.FileName, entry.Title, LibraryVerdict.Error, problem);
         }
+    }
+
+    private static byte[] SavedBytes(LoadedPlant loaded, double value, string? verdict, SaveContext context, string? name, string? note)
+    {
+        var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
+        return OperatingPointWriter.Apply(document, value, Record(loaded, value, verdict, context, name, note));
     }
 
     private static OperatingPointRecord Record(

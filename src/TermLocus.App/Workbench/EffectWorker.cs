@@ -11,7 +11,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     /// <summary>The outcome of <paramref name="effect"/>, or null when it has none (quitting, the recovery file).</summary>
     public Message? Perform(Effect effect) => effect switch
     {
-        LoadPlantEffect e => Load(e.Path),
+        LoadPlantEffect e => Load(e.Path, e.Keep),
         ScanLibraryEffect e => Scan(e.Folder),
         TraceLocusEffect e => Trace(e),
         DesignEffect e => CoreBridge.Design(e.Loaded),
@@ -19,15 +19,19 @@ public sealed class EffectWorker(SaveContext saveContext)
         SimulateResponseEffect e => CoreBridge.Simulate(e.Loaded, e.Values, e.Key),
         SaveOperatingPointEffect e => Save(e),
         SaveRecoveryEffect e => WriteRecovery(e),
+        CheckPlantFileEffect e => CoreBridge.CheckFile(e.Path, e.ExpectedSha256),
+        DeleteRecoveryEffect e => CoreBridge.DeleteRecovery(e.Path),
         QuitEffect => null,
         _ => throw new ArgumentOutOfRangeException(nameof(effect), effect, "unknown effect"),
     };
 
-    private static Message Load(string path)
+    private static Message Load(string path, KeptValue? keep)
     {
         try
         {
-            return new PlantLoaded(CoreBridge.Load(path));
+            var loaded = CoreBridge.Load(path);
+            // A reload keeps the user's value; a recovery file is offered only when a plant is opened.
+            return new PlantLoaded(loaded) { Kept = keep, Recovery = keep is null ? CoreBridge.FindRecovery(loaded) : null };
         }
         catch (PlantFileException e)
         {
@@ -67,8 +71,7 @@ public sealed class EffectWorker(SaveContext saveContext)
     {
         try
         {
-            var saved = CoreBridge.SaveOperatingPoint(e.Loaded, e.Value, e.Verdict, saveContext, e.Name, e.Note);
-            return new OperatingPointSaved(saved.Plant, saved, e.Value, e.QuitAfter);
+            return CoreBridge.Save(e, saveContext);
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException)
         {

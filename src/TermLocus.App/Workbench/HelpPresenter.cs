@@ -21,7 +21,10 @@ public static class HelpPresenter
 
     /// <summary>The scopes in the order help lists them.</summary>
     public static ImmutableArray<Scope> ScopeOrder { get; } =
-        [Scope.Main, Scope.PlanePane, Scope.PolesPane, Scope.Library, Scope.ValueEntry, Scope.SaveDialog, Scope.QuitConfirm, Scope.Help, Scope.Everywhere];
+        [
+            Scope.Main, Scope.PlanePane, Scope.PolesPane, Scope.Library, Scope.ValueEntry, Scope.SaveDialog, Scope.SaveConflict,
+            Scope.SaveAs, Scope.Recovery, Scope.QuitConfirm, Scope.Help, Scope.Everywhere,
+        ];
 
     /// <summary>The most lines help can have (at <see cref="MinimumWidth"/>); scrolling stops there.</summary>
     public static int LineCount { get; } = Lines(Glyphs.Unicode, MinimumWidth).Length;
@@ -58,6 +61,9 @@ public static class HelpPresenter
         Scope.Library => "Plant library (o)",
         Scope.ValueEntry => "Value box (=): type a number such as 1.25 or 4.7e-3",
         Scope.SaveDialog => "Save dialog (s): type the name, Tab, type the note",
+        Scope.SaveConflict => "When the plant file changed on disk or is gone (s asks)",
+        Scope.SaveAs => "Save under another name: type the new file's path",
+        Scope.Recovery => "Recovery file found on opening a plant",
         Scope.QuitConfirm => "Quit question (asked when the value is unsaved)",
         Scope.Help => "Help (?)",
         Scope.Everywhere => "Everywhere",

@@ -16,8 +16,10 @@ public static class KeyHints
         if (state.Session?.Varied.Parameter is null)
         {
             // Nothing to step through: the band hint would only take room.
-            hints = hints.RemoveAll(h => h.Commands.Contains(Command.StepBandUp));
+            hints = hints.RemoveAll(h => h.Commands.Contains(Command.StepBandUp) || h.Commands.Contains(Command.FinerBandStep));
         }
+
+        hints = hints.RemoveAll(h => !Offered(state, h));
 
         if (state.Session is { Loaded.Model: null })
         {
@@ -40,6 +42,16 @@ public static class KeyHints
 
         return string.Join("  ", texts.Where((_, i) => kept.Contains(i)).Select(t => t.Text));
     }
+
+    // Choices that do not apply to what happened are not offered (nothing to read again when the file is gone).
+    private static bool Offered(WorkbenchState state, Hint hint) => state.Overlay switch
+    {
+        SaveConflictOverlay { Reason: FileOnDisk.Missing } => !hint.Commands.Contains(Command.ReloadFromDisk),
+        SaveConflictOverlay => !hint.Commands.Contains(Command.WriteFileAgain),
+        RecoveryOverlay { File: var file } when !file.CanApply || file.Value == state.Session?.Sweep.SavedValue =>
+            !hint.Commands.Contains(Command.ApplyRecovery),
+        _ => true,
+    };
 
     private static string Render(Hint hint, Scope scope, Glyphs glyphs)
     {
@@ -74,6 +86,25 @@ public static class KeyHints
             new([Command.NextPane], "next field", 1),
             new([Command.Cancel], "cancel", 0),
         ]),
+        SaveConflictOverlay => (Scope.SaveConflict,
+        [
+            new([Command.ReloadFromDisk], "read it again", 0),
+            new([Command.SaveUnderAnotherName], "save under another name", 0),
+            new([Command.WriteFileAgain], "write it again", 0),
+            new([Command.Cancel], "cancel", 0),
+        ]),
+        SaveAsOverlay => (Scope.SaveAs,
+        [
+            new([Command.Confirm], "save", 0),
+            new([Command.Cancel], "cancel", 0),
+            new([Command.DeleteBackward], "delete", 1),
+        ]),
+        RecoveryOverlay => (Scope.Recovery,
+        [
+            new([Command.ApplyRecovery], "apply", 0),
+            new([Command.DiscardRecovery], "discard", 0),
+            new([Command.Cancel], "keep for later", 0),
+        ]),
         QuitConfirmOverlay => (Scope.QuitConfirm,
         [
             new([Command.SaveAndQuit], "save and quit", 0),
@@ -88,6 +119,7 @@ public static class KeyHints
         new([Command.StepSweepDown, Command.StepSweepUp], "step", 2),
         new([Command.StepBandUp, Command.StepBandDown], "band", 3),
         new([Command.FinerStep, Command.CoarserStep], "step size", 6),
+        new([Command.FinerBandStep, Command.CoarserBandStep], "band step", 8),
         new([Command.EnterValue], "value", 3),
         new([Command.JumpToPreviousBoundary, Command.JumpToNextBoundary], "boundary", 6),
         new([Command.JumpToRecommended], "design", 4),

@@ -22,6 +22,9 @@ public static class KeyMap
         LibraryOverlay => [Scope.Library, Scope.Everywhere],
         ValueEntryOverlay => [Scope.ValueEntry, Scope.Everywhere],
         SaveOverlay => [Scope.SaveDialog, Scope.Everywhere],
+        SaveConflictOverlay => [Scope.SaveConflict, Scope.Everywhere],
+        SaveAsOverlay => [Scope.SaveAs, Scope.Everywhere],
+        RecoveryOverlay => [Scope.Recovery, Scope.Everywhere],
         QuitConfirmOverlay => [Scope.QuitConfirm, Scope.Everywhere],
         _ => [PaneScope(state.Focus), Scope.Main, Scope.Everywhere],
     };
@@ -42,6 +45,9 @@ public static class KeyMap
 
         return null;
     }
+
+    /// <summary>True when printable keys not in the table are text for a box on top (value, save name, file name).</summary>
+    public static bool TypesText(WorkbenchState state) => state.Overlay is ValueEntryOverlay or SaveOverlay or SaveAsOverlay;
 
     /// <summary>The keys bound to <paramref name="command"/> in <paramref name="scope"/>, in table order.</summary>
     public static ImmutableArray<KeyChord> KeysFor(Command command, Scope scope) =>
@@ -81,8 +87,10 @@ public static class KeyMap
         Bind(Command.StepSweepUp, "step the swept value up", S(SpecialKey.Right), K('l'));
         Bind(Command.FinerStep, "finer step", K('['), K('-'));
         Bind(Command.CoarserStep, "coarser step", K(']'), K('+'));
-        Bind(Command.StepBandUp, "move the varied parameter up its band (a tenth)", S(SpecialKey.Up), K('k'));
+        Bind(Command.StepBandUp, "move the varied parameter up its band (one band step)", S(SpecialKey.Up), K('k'));
         Bind(Command.StepBandDown, "move the varied parameter down its band", S(SpecialKey.Down), K('j'));
+        Bind(Command.FinerBandStep, "finer band step: 1/20, 1/50, 1/100 of the band", K('{'), K('<'));
+        Bind(Command.CoarserBandStep, "coarser band step: 1/5, 1/2 of the band", K('}'), K('>'));
         Bind(Command.BandToNominal, "varied parameter back to nominal", K('0'));
         Bind(Command.NextVariedParameter, "vary the next toleranced parameter", K('v'));
         Bind(Command.JumpToRangeStart, "go to the start of the range", S(SpecialKey.Home), K('g'));
@@ -131,6 +139,19 @@ public static class KeyMap
         bind(Scope.SaveDialog, Command.MoveUp, "previous field", [S(SpecialKey.Up)]);
         bind(Scope.SaveDialog, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
         bind(Scope.SaveDialog, Command.Cancel, "cancel, nothing is written", [S(SpecialKey.Escape)]);
+
+        bind(Scope.SaveConflict, Command.ReloadFromDisk, "read the file again from disk, keeping the swept value", [K('r')]);
+        bind(Scope.SaveConflict, Command.SaveUnderAnotherName, "save under another name (a new file)", [K('a')]);
+        bind(Scope.SaveConflict, Command.WriteFileAgain, "write the file again where it was (when it is gone)", [K('w')]);
+        bind(Scope.SaveConflict, Command.Cancel, "cancel, nothing is written", [S(SpecialKey.Escape), K('c')]);
+
+        bind(Scope.SaveAs, Command.Confirm, "save into this new file", [S(SpecialKey.Enter)]);
+        bind(Scope.SaveAs, Command.DeleteBackward, "delete a character", [S(SpecialKey.Backspace)]);
+        bind(Scope.SaveAs, Command.Cancel, "cancel, nothing is written", [S(SpecialKey.Escape)]);
+
+        bind(Scope.Recovery, Command.ApplyRecovery, "apply its value, unsaved until you save", [K('a')]);
+        bind(Scope.Recovery, Command.DiscardRecovery, "discard it (delete the recovery file)", [K('d')]);
+        bind(Scope.Recovery, Command.Cancel, "keep it for later (offered again next time)", [K('k'), S(SpecialKey.Escape)]);
 
         bind(Scope.QuitConfirm, Command.SaveAndQuit, "save, then quit", [K('s'), K('y')]);
         bind(Scope.QuitConfirm, Command.DiscardAndQuit, "quit without saving", [K('d'), K('n')]);

@@ -54,7 +54,12 @@ public static class OverlayPresenter
             var sweep = session.Sweep;
             string file = SafeText.Visible(Path.GetFileName(session.Loaded.Plant.Path));
             lines.Add($"Save {sweep.Name} = {NumberText.Exact(sweep.Value)} into {file} as an operating point");
-            lines.AddRange(HelpPresenter.Wrap(VerdictWords(session, glyphs), Math.Max(1, width)).Take(2));
+            var warning = FileOverlayPresenter.DiskWarning(session, glyphs);
+            lines.AddRange(HelpPresenter.Wrap(VerdictWords(session, glyphs), Math.Max(1, width)).Take(warning is null ? 2 : 1));
+            if (warning is not null)
+            {
+                lines.Add(warning);
+            }
         }
 
         lines.Add(string.Empty);

@@ -49,6 +49,7 @@ internal static class Overlays
     {
         ValueEntryOverlay entry when entry.Text.Length > 0 => Update.Done(s with { Overlay = new ValueEntryOverlay(entry.Text[..^1], null) }),
         SaveOverlay dialog when dialog.Field.Length > 0 => Update.Done(s with { Overlay = dialog.WithField(dialog.Field[..^1]) }),
+        SaveAsOverlay box when box.Path.Length > 0 => FileConflicts.Edit(s, box, box.Path[..^1]),
         _ => Update.Done(s),
     };
 
@@ -61,6 +62,13 @@ internal static class Overlays
                 : Update.Done(s with { Overlay = dialog.WithField(dialog.Field + character) });
         }
 
+        if (s.Overlay is SaveAsOverlay box)
+        {
+            return char.IsControl(character) || box.Path.Length >= SaveAsOverlay.MaxLength
+                ? Update.Done(s)
+                : FileConflicts.Edit(s, box, box.Path + character);
+        }
+
         if (s.Overlay is not ValueEntryOverlay entry || char.IsControl(character) || entry.Text.Length >= MaxValueLength)
         {
             return Update.Done(s);
@@ -69,14 +77,19 @@ internal static class Overlays
         return Update.Done(s with { Overlay = new ValueEntryOverlay(entry.Text + character, null) });
     }
 
-    public static (WorkbenchState, ImmutableArray<Effect>) Cancel(WorkbenchState s) =>
-        Update.Done(s with { Overlay = Overlay.None });
+    public static (WorkbenchState, ImmutableArray<Effect>) Cancel(WorkbenchState s) => s.Overlay switch
+    {
+        SaveConflictOverlay or SaveAsOverlay => FileConflicts.Cancel(s),
+        RecoveryOverlay recovery => Recovering.Keep(s, recovery),
+        _ => Update.Done(s with { Overlay = Overlay.None }),
+    };
 
     public static (WorkbenchState, ImmutableArray<Effect>) Confirm(WorkbenchState s) => s.Overlay switch
     {
         ValueEntryOverlay entry => ConfirmValue(s, entry),
         LibraryOverlay library => OpenSelected(s, library),
         SaveOverlay dialog => Saving.Save(s with { Overlay = Overlay.None }, quitAfter: false, dialog.Name, dialog.Note),
+        SaveAsOverlay box => FileConflicts.ConfirmSaveAs(s, box),
         _ => Update.Done(s),
     };
 

@@ -5,8 +5,9 @@ using TermLocus.Core.Plants;
 namespace TermLocus.App.Workbench;
 
 /// <summary>
-/// The parameter panel: the plant's title, the swept parameter with its value and unit, the step, whether the value
-/// is saved, where it stands in its range as a small bar, then (given room) the file, the specs and the note.
+/// The parameter panel: the plant's title, the swept parameter with its value and unit, the step (and the band step),
+/// whether the value is saved and whether the file changed on disk, where it stands in its range as a small bar, the
+/// varied parameter and its band, then (given room) the file, the specs and the note.
 /// Short lines, most important first, so a narrow side panel shows what matters.
 /// </summary>
 public static class ParameterPanelPresenter
@@ -27,13 +28,27 @@ public static class ParameterPanelPresenter
             var sweep = session.Sweep;
             lines.Add(plant.Title.Length > 0 ? SafeText.Visible(plant.Title) : SafeText.Visible(Path.GetFileName(plant.Path)));
             lines.Add(ValueLine(sweep));
-            lines.Add("step " + NumberText.Exact(sweep.Step));
+            string step = "step " + NumberText.Exact(sweep.Step);
+            string? bandStep = session.Varied.Parameter is null ? null : BandStepLine(session.Varied);
+            // The band step shares the step line when it fits (a short panel keeps its specs); else it gets its own.
+            string? shared = bandStep is null ? null
+                : new[] { $"{step}   {bandStep}", $"{step}   band step 1/{session.Varied.Divisions}" }.FirstOrDefault(l => TextWidth.Of(l) <= width);
+            lines.Add(shared ?? step);
             lines.Add(sweep.Unsaved ? $"{glyphs.Violated} unsaved (file: {NumberText.Exact(sweep.SavedValue)})" : "saved in the file");
+            if (DiskLine(session.Disk, glyphs) is { } disk)
+            {
+                lines.Add(disk);
+            }
+
             lines.Add(Bar(sweep, width, glyphs));
             if (session.Varied.Parameter is not null)
             {
                 lines.Add(VariedLine(session.Varied));
                 lines.Add(BandBar(session.Varied, width, glyphs));
+                if (shared is null)
+                {
+                    lines.Add(bandStep!);
+                }
             }
 
             lines.Add("file: " + SafeText.Visible(Path.GetFileName(plant.Path)));
@@ -69,6 +84,18 @@ public static class ParameterPanelPresenter
             : "nominal " + NumberText.Short(varied.Nominal, 6);
         return $"{varied.Parameter} = {NumberText.Short(varied.Value, 6)}{unit} ({offset})";
     }
+
+    /// <summary>"! file changed on disk", "! file gone from disk", or null while the file is as loaded.</summary>
+    public static string? DiskLine(FileOnDisk disk, Glyphs glyphs) => disk switch
+    {
+        FileOnDisk.Changed => glyphs.Violated + " file changed on disk",
+        FileOnDisk.Missing => glyphs.Violated + " file gone from disk",
+        _ => null,
+    };
+
+    /// <summary>"band step 1/10 = 0.08": how far ↑/↓ move the varied parameter.</summary>
+    public static string BandStepLine(VariedPosition varied) =>
+        $"band step 1/{varied.Divisions} = {NumberText.Short(varied.Step, 4)}";
 
     /// <summary>"0.3 ──●──── 0.65": the band's ends and the varied value's place between them.</summary>
     public static string BandBar(VariedPosition varied, int width, Glyphs glyphs) =>

@@ -55,6 +55,18 @@ public sealed record PlantSession(
     /// <summary>True when the band check is still running for the swept value (a plant with a loop model only).</summary>
     public bool CheckPending => Check is null && Loaded.Model is not null;
 
+    /// <summary>How the plant file on disk compares with the bytes loaded, as last checked.</summary>
+    public FileOnDisk Disk { get; init; } = FileOnDisk.AsLoaded;
+
+    /// <summary>True from asking for a save until its outcome arrives: our own write is not news about the file.</summary>
+    public bool SaveInFlight { get; init; }
+
+    /// <summary>A free file name beside the plant file for a save under another name, as last checked; null until checked.</summary>
+    public string? SaveAsSuggestion { get; init; }
+
+    /// <summary>The recovery file whose value was applied (deleted once the value is saved into the plant), or null.</summary>
+    public string? AppliedRecovery { get; init; }
+
     /// <summary>The inputs of the last trace asked for, so a trace in flight (or one that failed) is not asked for again.</summary>
     public TraceKey? RequestedTrace { get; init; }
 

@@ -32,14 +32,8 @@ public sealed record PoleSnapshot(double Value, ImmutableArray<Complex> Poles, I
 
     /// <summary>The specs that <paramref name="pole"/> (or its conjugate) misses.</summary>
     public ImmutableArray<SpecMiss> MissesOf(Complex pole) =>
-        Misses.Where(m => SamePair(m.Pole, pole)).ToImmutableArray();
+        Misses.Where(m => ConjugatePair.Matches(m.Pole, pole)).ToImmutableArray();
 
     /// <summary>The band figures of <paramref name="pole"/> (or its conjugate), or null.</summary>
-    public PoleBandFigures? BandFiguresOf(Complex pole) => BandFigures.FirstOrDefault(f => SamePair(f.Pole, pole));
-
-    internal static bool SamePair(Complex a, Complex b)
-    {
-        double scale = Math.Max(1e-12, Math.Max(Complex.Abs(a), Complex.Abs(b)));
-        return Complex.Abs(a - b) <= 1e-9 * scale || Complex.Abs(a - Complex.Conjugate(b)) <= 1e-9 * scale;
-    }
+    public PoleBandFigures? BandFiguresOf(Complex pole) => BandFigures.FirstOrDefault(f => ConjugatePair.Matches(f.Pole, pole));
 }

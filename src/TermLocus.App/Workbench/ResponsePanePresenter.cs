@@ -11,7 +11,9 @@ namespace TermLocus.App.Workbench;
 /// The step-response pane: the closed-loop unit-step response as a dot plot with the ±2 % band and the peak marked
 /// (the plot <c>termlocus response</c> draws), and the measured figures beside the dominant-pair estimates: the full
 /// table to the right when the pane is wide, a short one below it otherwise. A figure over the file's overshoot limit
-/// is marked with the violation glyph.
+/// is marked with the violation glyph. For a sampled loop the curve is the plant output between samples, the sample
+/// instants are marked on it when they lie far enough apart (<see cref="ResponsePlot.MarksSamples"/>), and the tables
+/// give the figures of the instants alone in a column of their own.
 /// </summary>
 public static class ResponsePanePresenter
 {
@@ -51,10 +53,24 @@ public static class ResponsePanePresenter
 
         var e = response.Estimate;
         bool over = overshootLimit is double limit && f.OvershootPct is double pct && pct > limit;
+        string overshoot = over ? g.Violated + " overshoot %" : "overshoot %";
+        if (response.Method == ResponseMethod.SampledBetweenSamples && response.SampleFigures is { } k)
+        {
+            return
+            [
+                $"{"figure",-16}{"simulated",10}{"at kT",9}{"estimate",10}",
+                Row(overshoot, f.OvershootPct, k.OvershootPct, e?.OvershootPct),
+                Row("peak s", f.PeakTimeSeconds, k.PeakTimeSeconds, e?.PeakTimeSeconds),
+                Row("settling 2 % s", f.SettlingTime2PctSeconds, k.SettlingTime2PctSeconds, e?.SettlingTime2PctSeconds),
+                Row("rise 10-90 % s", f.RiseTimeSeconds, k.RiseTimeSeconds, null),
+                Row("steady state", response.SteadyState, response.SteadyState, null),
+            ];
+        }
+
         return
         [
             $"{"figure",-16}{"simulated",10}{"estimate",10}",
-            Row(over ? g.Violated + " overshoot %" : "overshoot %", f.OvershootPct, e?.OvershootPct),
+            Row(overshoot, f.OvershootPct, e?.OvershootPct),
             Row("peak s", f.PeakTimeSeconds, e?.PeakTimeSeconds),
             Row("settling 2 % s", f.SettlingTime2PctSeconds, e?.SettlingTime2PctSeconds),
             Row("rise 10-90 % s", f.RiseTimeSeconds, null),
@@ -66,8 +82,8 @@ public static class ResponsePanePresenter
     {
         double? limit = session.Loaded.Plant.Specs.MaxOvershootPct;
         bool beside = width - FiguresWidth >= MinimumSidePlotWidth;
-        var figures = beside ? FullFigures(response, limit, g) : CompactFigures(response, limit, g).ToList();
         int plotColumns = beside ? width - FiguresWidth : width;
+        var figures = beside ? FullFigures(response, limit, g, plotColumns, symbols) : CompactFigures(response, limit, g).ToList();
         int plotRows = beside ? height : height - figures.Count;
         var plot = plotRows >= MinimumPlotRows && plotColumns >= MinimumPlotColumns
             ? Plot(response, plotColumns, plotRows, symbols)
@@ -91,10 +107,11 @@ public static class ResponsePanePresenter
     private static List<string> Plot(LoopResponse response, int columns, int rows, CanvasSymbols symbols)
     {
         var trace = response.Trace!;
-        return [.. ResponsePlot.Render(trace.Times, trace.Outputs, response.SteadyState, response.Figures?.PeakTimeSeconds, columns, rows, symbols)];
+        var samples = response.Method == ResponseMethod.SampledBetweenSamples ? response.SampleTrace : null;
+        return [.. ResponsePlot.Render(trace.Times, trace.Outputs, response.SteadyState, response.Figures?.PeakTimeSeconds, columns, rows, symbols, samples)];
     }
 
-    private static List<string> FullFigures(LoopResponse response, double? limit, Glyphs g)
+    private static List<string> FullFigures(LoopResponse response, double? limit, Glyphs g, int plotColumns, CanvasSymbols symbols)
     {
         var lines = ResponseReportPresenter.Lines(response, g).ToList();
         if (limit is double l && response.Figures?.OvershootPct is double pct && pct > l)
@@ -107,11 +124,21 @@ public static class ResponsePanePresenter
             lines.Add("figures of the output at the sample instants");
         }
 
+        if (response is { Method: ResponseMethod.SampledBetweenSamples, SampleTrace: { } samples, Trace: { } trace })
+        {
+            lines.Add(ResponsePlot.MarksSamples(samples, trace.Times, plotColumns)
+                ? $"{(symbols == CanvasSymbols.Braille ? '•' : 'o')} on the curve: the sample instants"
+                : "the sample instants lie too close to mark");
+        }
+
         return lines;
     }
 
     private static string Row(string name, double? simulated, double? estimate) =>
         $"{name,-16}{Show(simulated),10}{Show(estimate),10}";
+
+    private static string Row(string name, double? simulated, double? atSamples, double? estimate) =>
+        $"{name,-16}{Show(simulated),10}{Show(atSamples),9}{Show(estimate),10}";
 
     private static string Show(double? value) => value is double v ? NumberText.Significant(v) : "-";
 

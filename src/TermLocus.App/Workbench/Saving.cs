@@ -6,7 +6,10 @@ namespace TermLocus.App.Workbench;
 /// <summary>Saving the chosen value and the ways out: quit, quit after a question, quit at once.</summary>
 internal static class Saving
 {
-    /// <summary>Opens the save dialog with the default name and note, unless there is nothing to save.</summary>
+    /// <summary>
+    /// Opens the save dialog with the default name and note (and looks at the file on disk again), unless there is
+    /// nothing to save; when the file is known to have changed on disk or to be gone, offers the choice instead.
+    /// </summary>
     public static (WorkbenchState, ImmutableArray<Effect>) OpenDialog(WorkbenchState s)
     {
         if (s.Session is not { } session)
@@ -14,18 +17,29 @@ internal static class Saving
             return Update.NoPlant(s);
         }
 
+        if (session.Disk != FileOnDisk.AsLoaded)
+        {
+            return FileConflicts.Offer(s, DefaultName(session.Sweep), SaveOverlay.DefaultNote, quitAfter: false);
+        }
+
         if (!session.Unsaved)
         {
             return NothingToSave(s, session.Sweep);
         }
 
-        return Update.Done(s with { Overlay = new SaveOverlay(DefaultName(session.Sweep), SaveOverlay.DefaultNote, NoteField: false) });
+        var dialog = new SaveOverlay(DefaultName(session.Sweep), SaveOverlay.DefaultNote, NoteField: false);
+        return (s with { Overlay = dialog }, FileConflicts.CheckEffects(session));
     }
 
     /// <summary>"Kp = 3.2": the name an operating point gets when none is typed.</summary>
     public static string DefaultName(SweepState sweep) => $"{sweep.Name} = {NumberText.Exact(sweep.Value)}";
 
-    public static (WorkbenchState, ImmutableArray<Effect>) Save(WorkbenchState s, bool quitAfter, string? name = null, string? note = null)
+    /// <summary>
+    /// Saves the swept value: into the plant file (skipped when nothing changed; the choice is offered instead when
+    /// the file is known to have changed on disk or to be gone), or as <paramref name="mode"/> says.
+    /// </summary>
+    public static (WorkbenchState, ImmutableArray<Effect>) Save(
+        WorkbenchState s, bool quitAfter, string? name = null, string? note = null, SaveMode mode = SaveMode.IntoPlantFile, string? target = null)
     {
         if (s.Session is not { } session)
         {
@@ -33,16 +47,30 @@ internal static class Saving
         }
 
         var sweep = session.Sweep;
-        if (!session.Unsaved)
+        string chosenName = string.IsNullOrWhiteSpace(name) ? DefaultName(sweep) : name.Trim();
+        string chosenNote = string.IsNullOrWhiteSpace(note) ? SaveOverlay.DefaultNote : note.Trim();
+        if (mode == SaveMode.IntoPlantFile && session.Disk != FileOnDisk.AsLoaded)
+        {
+            return FileConflicts.Offer(s, chosenName, chosenNote, quitAfter);
+        }
+
+        if (mode == SaveMode.IntoPlantFile && !session.Unsaved)
         {
             // Nothing changed: skip the write, leave the file's bytes alone.
             return quitAfter ? (s, [new QuitEffect()]) : NothingToSave(s, sweep);
         }
 
-        string chosenName = string.IsNullOrWhiteSpace(name) ? DefaultName(sweep) : name.Trim();
-        string chosenNote = string.IsNullOrWhiteSpace(note) ? SaveOverlay.DefaultNote : note.Trim();
-        return (s with { Message = StatusMessage.Info($"saving {sweep.Name} = {NumberText.Exact(sweep.Value)}") },
-            [new SaveOperatingPointEffect(session.Loaded, sweep.Value, Verdict(session), quitAfter, chosenName, chosenNote)]);
+        string where = target is null ? string.Empty : " to " + SafeText.Visible(Path.GetFileName(target));
+        var save = new SaveOperatingPointEffect(session.Loaded, sweep.Value, Verdict(session), quitAfter, chosenName, chosenNote)
+        {
+            Mode = mode,
+            TargetPath = target,
+        };
+        return (s with
+        {
+            Session = session with { SaveInFlight = true },
+            Message = StatusMessage.Info($"saving {sweep.Name} = {NumberText.Exact(sweep.Value)}{where}"),
+        }, [save]);
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Quit(WorkbenchState s) =>

@@ -30,6 +30,15 @@ public enum Scope
     /// <summary>The save dialog (name and note of the operating point).</summary>
     SaveDialog,
 
+    /// <summary>The choice offered when a save is refused because the plant file changed on disk or is gone.</summary>
+    SaveConflict,
+
+    /// <summary>The box to type the file name of a save under another name.</summary>
+    SaveAs,
+
+    /// <summary>The choice offered when a plant is opened and a recovery file lies beside it.</summary>
+    Recovery,
+
     /// <summary>The question asked before quitting with an unsaved value.</summary>
     QuitConfirm,
 }

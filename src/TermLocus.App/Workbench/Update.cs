@@ -25,6 +25,8 @@ public static class Update
             Command.CoarserStep => Sweeping.ChangeStep(s, finer: false),
             Command.StepBandDown => Banding.Step(s, -1),
             Command.StepBandUp => Banding.Step(s, +1),
+            Command.FinerBandStep => Banding.ChangeStep(s, finer: true),
+            Command.CoarserBandStep => Banding.ChangeStep(s, finer: false),
             Command.BandToNominal => Banding.ToNominal(s),
             Command.NextVariedParameter => Banding.NextParameter(s),
             Command.JumpToRangeStart => Sweeping.ToRangeEnd(s, atStart: true),
@@ -48,6 +50,11 @@ public static class Update
             Command.OpenLibrary => Overlays.OpenLibrary(s),
             Command.ShowHelp => Done(s with { Overlay = new HelpOverlay(0) }),
             Command.SaveOperatingPoint => Saving.OpenDialog(s),
+            Command.ReloadFromDisk => FileConflicts.Reload(s),
+            Command.SaveUnderAnotherName => FileConflicts.SaveUnderAnotherName(s),
+            Command.WriteFileAgain => FileConflicts.WriteAgain(s),
+            Command.ApplyRecovery => Recovering.Apply(s),
+            Command.DiscardRecovery => Recovering.Discard(s),
             Command.DeleteBackward => Overlays.DeleteBackward(s),
             Command.Confirm => Overlays.Confirm(s),
             Command.Cancel => Overlays.Cancel(s),
@@ -62,16 +69,17 @@ public static class Update
     public static (WorkbenchState State, ImmutableArray<Effect> Effects) Receive(WorkbenchState state, Message message) =>
         message switch
         {
-            PlantLoaded m => Arrivals.PlantLoaded(state, m.Loaded),
-            PlantLoadFailed m => Done(state with { Message = StatusMessage.Error(Text.SafeText.Visible(m.Problem)) }),
+            PlantLoaded m => Arrivals.PlantLoaded(state, m),
+            PlantLoadFailed m => Arrivals.PlantLoadFailed(state, m),
             LibraryScanned m => Arrivals.LibraryScanned(state, m),
             LocusTraced m => Arrivals.LocusTraced(state, m.Analysis),
             LocusTraceFailed m => Arrivals.LocusTraceFailed(state, m),
             OperatingPointSaved m => Arrivals.Saved(state, m),
-            OperatingPointSaveFailed m => Done(state with
-            {
-                Message = StatusMessage.Error("not saved: " + Text.SafeText.Visible(m.Problem)),
-            }),
+            OperatingPointSaveFailed m => Arrivals.SaveFailed(state, m),
+            SaveRefused m => FileConflicts.Refused(state, m),
+            PlantFileTouched m => FileConflicts.Touched(state, m),
+            PlantFileChecked m => FileConflicts.Checked(state, m),
+            RecoveryDeleted m => Recovering.Deleted(state, m),
             BandCheck m => Arrivals.BandChecked(state, m),
             Designed m => Done(state.Session is { } session && session.Loaded.Plant.Path == m.PlantPath
                 ? state with { Session = session with { Design = m } }

@@ -3,8 +3,9 @@ using TermLocus.Core.Plants;
 namespace TermLocus.App.Workbench;
 
 /// <summary>
-/// Where the toleranced ("varied") parameter stands in its band. ↑/↓ step it a tenth of the band at a time (through
-/// its nominal value too); every other parameter stays at its nominal value.
+/// Where the toleranced ("varied") parameter stands in its band. ↑/↓ step it by a fraction of the band (a tenth at
+/// first; { and } make it finer or coarser), stopping at its nominal value too; every other parameter stays at its
+/// nominal value.
 /// </summary>
 /// <param name="Parameter">The varied parameter's name (an identifier, safe to print), or null when the plant has no
 /// toleranced parameter besides the swept one.</param>
@@ -14,8 +15,14 @@ namespace TermLocus.App.Workbench;
 /// <param name="Value">The value being looked at, inside the band.</param>
 public sealed record VariedPosition(string? Parameter, string Unit, double Nominal, Interval Band, double Value)
 {
-    /// <summary>Steps across the band.</summary>
-    public const int Divisions = 10;
+    /// <summary>Steps across the band when a plant is opened.</summary>
+    public const int DefaultDivisions = 10;
+
+    /// <summary>
+    /// The choices of steps across the band, coarsest first: halves reach the corners and nominal in a key or two;
+    /// a hundredth finds where a spec starts to fail.
+    /// </summary>
+    public static IReadOnlyList<int> DivisionSeries { get; } = [2, 5, 10, 20, 50, 100];
 
     /// <summary>No varied parameter.</summary>
     public static VariedPosition None { get; } = new(null, string.Empty, 0, new Interval(0, 0), 0);
@@ -23,7 +30,10 @@ public sealed record VariedPosition(string? Parameter, string Unit, double Nomin
     /// <summary>True when the value is the nominal one (always, without a varied parameter).</summary>
     public bool IsNominal => Value == Nominal;
 
-    /// <summary>One step: a tenth of the band.</summary>
+    /// <summary>Steps across the band, one of <see cref="DivisionSeries"/>.</summary>
+    public int Divisions { get; init; } = DefaultDivisions;
+
+    /// <summary>One step: the band's width over <see cref="Divisions"/>.</summary>
     public double Step => Band.Width / Divisions;
 
     /// <summary>Where the value stands in the band, 0 at the low end and 1 at the high end (0.5 for a band of no width).</summary>
@@ -32,7 +42,18 @@ public sealed record VariedPosition(string? Parameter, string Unit, double Nomin
     /// <summary>Offset of the value from nominal in percent of the nominal value; null when the nominal value is 0.</summary>
     public double? PercentFromNominal => Nominal == 0 ? null : 100.0 * (Value - Nominal) / Math.Abs(Nominal);
 
-    /// <summary>The varied parameter <paramref name="parameter"/> of <paramref name="plant"/> at its nominal value.</summary>
+    /// <summary>
+    /// The next division count of <see cref="DivisionSeries"/>: finer (more steps) or coarser; the same at either end.
+    /// </summary>
+    public int NextDivisions(bool finer)
+    {
+        var series = DivisionSeries;
+        int at = series.Count(d => d < Divisions);
+        int next = finer ? series.FirstOrDefault(d => d > Divisions) : (at > 0 ? series[at - 1] : 0);
+        return next == 0 ? Divisions : next;
+    }
+
+    /// <summary>The varied parameter <paramref name="parameter"/> at its nominal value.</summary>
     public static VariedPosition AtNominal(Parameter parameter) =>
         new(parameter.Name, parameter.Unit, parameter.Value, parameter.Band ?? new Interval(parameter.Value, parameter.Value), parameter.Value);
 
@@ -49,8 +70,8 @@ public sealed record VariedPosition(string? Parameter, string Unit, double Nomin
         plant.TolerancedParameters().Where(p => p.Name != plant.Loop.Sweep).ToList();
 
     /// <summary>
-    /// The next stop above (<paramref name="direction"/> +1) or below (-1) the value: the band's tenths and the nominal
-    /// value; the value itself at the end of the band.
+    /// The next stop above (<paramref name="direction"/> +1) or below (-1) the value: the band split in
+    /// <see cref="Divisions"/> steps, and the nominal value; the value itself at the end of the band.
     /// </summary>
     public double Next(int direction)
     {

@@ -6,7 +6,9 @@ namespace TermLocus.Core.Analysis;
 
 /// <summary>
 /// The <c>max_overshoot_pct</c> limit, checked on the simulated closed-loop step response (not on the poles) at the
-/// given values and at every corner of the tolerance box. Interior points of the box are not searched for this
+/// given values and at every corner of the tolerance box. For a sampled loop the overshoot is that of the plant output
+/// between samples (<see cref="LoopResponse.Figures"/> with <see cref="ResponseMethod.SampledBetweenSamples"/>), not
+/// only of the sample instants: a peak the samples miss still counts. Interior points of the box are not searched for this
 /// limit: each point costs a full simulation.
 /// </summary>
 public static class OvershootCheck

@@ -49,7 +49,7 @@ public static class AtomicFileSaver
             return new(SaveOutcome.Unchanged, target, $"{path} already holds these values; nothing written");
         }
 
-        return WriteProblem(path, target) ?? Replace(path, target, newBytes);
+        return WriteProblem(path, target) ?? Replace(path, target, newBytes, ModeOf(target));
     }
 
     /// <summary>Like <see cref="TrySave(string, ReadOnlySpan{byte}, ReadOnlySpan{byte})"/> for a loaded plant document.</summary>
@@ -71,8 +71,18 @@ public static class AtomicFileSaver
     /// Writes <paramref name="bytes"/> to <paramref name="path"/> whether or not it exists (a recovery file, a save
     /// under another name), with the same atomic replacement but no changed-on-disk check. An existing file is replaced
     /// only when <paramref name="overwrite"/> is true (its permission bits kept); a new file gets the default mode.
+    /// A folder without write permission bits is refused, as for <see cref="TrySave(string, ReadOnlySpan{byte}, ReadOnlySpan{byte})"/>.
     /// </summary>
-    public static AtomicSaveResult TryWriteFile(string path, ReadOnlySpan<byte> bytes, bool overwrite)
+    public static AtomicSaveResult TryWriteFile(string path, ReadOnlySpan<byte> bytes, bool overwrite) =>
+        TryWriteFile(path, bytes, overwrite, null);
+
+    /// <summary>
+    /// Like <see cref="TryWriteFile(string, ReadOnlySpan{byte}, bool)"/>, but a file that does not exist yet gets the
+    /// permission bits of <paramref name="permissionsOf"/> (the file its content was made from, so a private plant
+    /// file does not leave a world-readable copy) instead of the default mode. Ignored on Windows, or when that file
+    /// cannot be read for its mode.
+    /// </summary>
+    public static AtomicSaveResult TryWriteFile(string path, ReadOnlySpan<byte> bytes, bool overwrite, string? permissionsOf)
     {
         ArgumentNullException.ThrowIfNull(path);
         if (!TryResolveTarget(path, out var target, out var failure))
@@ -88,12 +98,12 @@ public static class AtomicFileSaver
                 return new(SaveOutcome.Failed, target, $"the folder of {path} does not exist");
             }
 
-            return Replace(path, target, bytes);
+            return FolderProblem(path, target) ?? Replace(path, target, bytes, ModeOf(permissionsOf));
         }
 
         return !overwrite
             ? new(SaveOutcome.AlreadyExists, target, $"{path} exists already; choose another name")
-            : WriteProblem(path, target) ?? Replace(path, target, bytes);
+            : WriteProblem(path, target) ?? Replace(path, target, bytes, ModeOf(target));
     }
 
     private static bool TryResolveTarget(string path, out string target, out AtomicSaveResult? failure)
@@ -137,9 +147,9 @@ public static class AtomicFileSaver
             return new(SaveOutcome.ReadOnlyFile, target, $"{path} is read-only (mode {Convert.ToString((int)mode, 8)}); make it writable (chmod u+w) or save under another name");
         }
 
-        if ((File.GetUnixFileMode(folder) & AnyWrite) == 0)
+        if (FolderProblem(path, target) is { } problem)
         {
-            return new(SaveOutcome.ReadOnlyFolder, target, $"the folder {folder} is read-only, and saving writes a new copy beside {Path.GetFileName(target)}; make the folder writable or save elsewhere");
+            return problem;
         }
 
         try
@@ -158,13 +168,39 @@ public static class AtomicFileSaver
         return null;
     }
 
-    private static AtomicSaveResult Replace(string path, string target, ReadOnlySpan<byte> newBytes)
+    // Checked by mode bits, not by trying: root may write anywhere, but a folder marked read-only means "keep out".
+    private static AtomicSaveResult? FolderProblem(string path, string target)
+    {
+        var folder = Path.GetDirectoryName(target)!;
+        return OperatingSystem.IsWindows() || (File.GetUnixFileMode(folder) & AnyWrite) != 0
+            ? null
+            : new(SaveOutcome.ReadOnlyFolder, target, $"the folder {folder} is read-only, and saving writes a new copy beside {Path.GetFileName(target)}; make the folder writable or save elsewhere");
+    }
+
+    private static UnixFileMode? ModeOf(string? file)
+    {
+        if (file is null || OperatingSystem.IsWindows())
+        {
+            return null;
+        }
+
+        try
+        {
+            return File.GetUnixFileMode(file);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
+        {
+            return null;
+        }
+    }
+
+    private static AtomicSaveResult Replace(string path, string target, ReadOnlySpan<byte> newBytes, UnixFileMode? mode)
     {
         var folder = Path.GetDirectoryName(target)!;
         var temp = Path.Combine(folder, $".{Path.GetFileName(target)}.{RandomNumberGenerator.GetHexString(12, lowercase: true)}.tmp");
         try
         {
-            WriteTemporary(temp, target, newBytes);
+            WriteTemporary(temp, newBytes, mode);
             File.Move(temp, target, overwrite: true);
         }
         catch (UnauthorizedAccessException) when (!File.Exists(temp))
@@ -176,6 +212,12 @@ public static class AtomicFileSaver
             TryDelete(temp);
             return new(SaveOutcome.Failed, target, $"could not save {path}: {PlantTextSafety.Visible(e.Message, 200)}; the file is unchanged");
         }
+        catch (ArgumentOutOfRangeException)
+        {
+            // .NET reports EFBIG (over the process's file-size limit, or the file system's largest file) this way.
+            TryDelete(temp);
+            return new(SaveOutcome.Failed, target, string.Create(CultureInfo.InvariantCulture, $"could not save {path}: the new file ({newBytes.Length} bytes) is larger than the file-size limit (ulimit -f) or the file system allows; the file is unchanged"));
+        }
 
         var error = FolderSync.Flush(folder);
         return new(SaveOutcome.Saved, target, error == 0
@@ -183,13 +225,13 @@ public static class AtomicFileSaver
             : string.Create(CultureInfo.InvariantCulture, $"saved {path} (the folder could not be flushed to disk, errno {error})"));
     }
 
-    private static void WriteTemporary(string temp, string target, ReadOnlySpan<byte> newBytes)
+    private static void WriteTemporary(string temp, ReadOnlySpan<byte> newBytes, UnixFileMode? mode)
     {
         using var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write, FileShare.None);
-        if (!OperatingSystem.IsWindows() && File.Exists(target))
+        if (mode is { } bits && !OperatingSystem.IsWindows())
         {
-            // The create mode is masked by the umask; set the original's bits on the open handle instead.
-            File.SetUnixFileMode(stream.SafeFileHandle, File.GetUnixFileMode(target));
+            // The create mode is masked by the umask; set the wanted bits on the open handle, before any byte is written.
+            File.SetUnixFileMode(stream.SafeFileHandle, bits);
         }
 
         stream.Write(newBytes);

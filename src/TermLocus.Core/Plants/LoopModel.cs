@@ -232,6 +232,11 @@ public sealed class LoopModel
     internal (RationalFunction Forward, RationalFunction Feedback)? DelayFreePaths(IReadOnlyDictionary<string, double> values) =>
         parts.Path is ContinuousLoopPath continuous ? continuous.DelayFreePaths(slots.Resolve(values)) : null;
 
+    /// <summary>Controller, plant, sensor and held plant·sensor denominator; null unless the loop is sampled and built from parts.</summary>
+    /// <exception cref="PlantFileException">The loop cannot be formed at these values.</exception>
+    internal SampledLoopParts? SampledParts(IReadOnlyDictionary<string, double> values) =>
+        parts.Path is SampledLoopPath sampled ? sampled.Parts(slots.Resolve(values)) : null;
+
     /// <summary>True for positive feedback (1 − L).</summary>
     internal bool IsPositiveFeedback => parts.Feedback == FeedbackSign.Positive;
 }

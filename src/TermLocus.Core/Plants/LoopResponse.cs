@@ -14,9 +14,16 @@ namespace TermLocus.Core.Plants;
 /// approximant, except when it is shorter than half a grid step (<see cref="ResponseMethod.PadeDelay"/>). The grid is
 /// <see cref="ResponseGrid.For"/> of the reference-to-output function (with the Padé factor when delayed, made at
 /// least as long and as fine as that of the delay-free loop) plus the delay.</item>
-/// <item>Sampled loop: the output at the sample instants kT (<see cref="ResponseMethod.Sampled"/>); what the plant
-/// output does between samples is not computed, and the figures are those of the samples
-/// (<see cref="StepFigures.FromSamples"/>).</item>
+/// <item>Sampled loop: the hybrid loop simulated exactly (<see cref="ResponseMethod.SampledBetweenSamples"/>,
+/// <see cref="HeldLoopResponse"/>): the trace is the plant output (the output of controller·plant, not the sampled
+/// sensor) at <see cref="PointsPerSample"/> points per sample interval (<see cref="HeldLoopResponse.PointsPerSample"/>),
+/// and the figures are measured on it (<see cref="StepFigures.FromBetweenSamples"/>): an overshoot between samples is
+/// what a rig shows, and what <c>max_overshoot_pct</c> is checked against. The output at the instants kT, which
+/// equals the step response of the closed loop in z, is <see cref="SampleTrace"/> with its figures
+/// <see cref="SampleFigures"/> (<see cref="StepFigures.FromSamples"/>). The instants run as long as
+/// <see cref="ResponseGrid.ForSampled"/> asks for the output and for the controller output (a mode the controller
+/// hides from the instants, ripple, still rings between them). When the parts do not allow the hybrid simulation the
+/// trace is the output at the instants alone (<see cref="ResponseMethod.Sampled"/>, <see cref="Warning"/> says why).</item>
 /// </list>
 /// Stability, the steady state and the second-order estimates come from the characteristic polynomial's roots
 /// (the Padé one for a delayed continuous loop, the same the locus shows), each root read through
@@ -25,7 +32,8 @@ namespace TermLocus.Core.Plants;
 /// </summary>
 /// <param name="Plane">The loop's plane.</param>
 /// <param name="Method">How the trace was made; <see cref="ResponseMethod.None"/> with a <paramref name="Failure"/>.</param>
-/// <param name="Trace">The step response (times in seconds from the step); null on failure.</param>
+/// <param name="Trace">The step response (times in seconds from the step); for a sampled loop the plant output between
+/// samples, or the output at the instants alone with <see cref="ResponseMethod.Sampled"/>; null on failure.</param>
 /// <param name="IsStable">True when every closed-loop root is strictly stable in its plane.</param>
 /// <param name="SteadyState">The final value (the steady-state gain of reference to output); null when the loop is not
 /// strictly stable or on failure.</param>
@@ -48,6 +56,22 @@ public sealed record LoopResponse(
 {
     /// <summary>True when there is a trace (no <see cref="Failure"/>).</summary>
     public bool IsAvailable => Failure is null;
+
+    /// <summary>
+    /// For a sampled loop, the output at the sample instants kT, k = 0, 1, ... (seconds from the step); null for a
+    /// continuous loop or on failure. With <see cref="ResponseMethod.SampledBetweenSamples"/> every
+    /// <see cref="PointsPerSample"/>-th point of <see cref="Trace"/>; with <see cref="ResponseMethod.Sampled"/> the trace itself.
+    /// </summary>
+    public ResponseTrace? SampleTrace { get; init; }
+
+    /// <summary>
+    /// The figures of <see cref="SampleTrace"/> (<see cref="StepFigures.FromSamples"/>, the peak the largest sample);
+    /// null when <see cref="SampleTrace"/> or <see cref="SteadyState"/> is.
+    /// </summary>
+    public StepFigures? SampleFigures { get; init; }
+
+    /// <summary>The points per sample interval of <see cref="Trace"/> (&gt;= 1) with <see cref="ResponseMethod.SampledBetweenSamples"/>; null otherwise.</summary>
+    public int? PointsPerSample { get; init; }
 
     /// <summary>
     /// The step response of <paramref name="model"/> at <paramref name="values"/> (names left out take their
@@ -74,7 +98,7 @@ public sealed record LoopResponse(
             return Failed(model.Plane, why);
         }
 
-        return model.Plane.IsSampled ? Sampled(model, values, closed) : Continuous(model, values, closed);
+        return model.Plane.IsSampled ? SampledLoopResponse.Analyse(model, values, closed) : Continuous(model, values, closed);
     }
 
     private static LoopResponse Continuous(LoopModel model, IReadOnlyDictionary<string, double> values, RationalFunction closed)
@@ -156,28 +180,6 @@ public sealed record LoopResponse(
         var sign = model.IsPositiveFeedback ? -1.0 : 1.0;
         var forwardNumerator = forward.Numerator * feedback.Denominator * pade.Numerator;
         return new RationalFunction(forwardNumerator, open.Denominator + open.Numerator.Scale(sign));
-    }
-
-    private static LoopResponse Sampled(LoopModel model, IReadOnlyDictionary<string, double> values, RationalFunction closed)
-    {
-        double t = model.Plane.SampleTimeSeconds!.Value;
-        var grid = ResponseGrid.ForSampled(closed, t, model.DelaySeconds);
-        var trace = StepResponse.SimulateSampled(closed, t, grid.Samples);
-        double? steady = StepFigures.SteadyStateOfSampled(closed);
-        var equivalent = PolynomialRoots.Find(closed.Denominator)
-            .Select(model.Plane.ToEquivalentS)
-            .Where(s => double.IsFinite(s.Real) && double.IsFinite(s.Imaginary))
-            .ToArray();
-        return new LoopResponse(
-            model.Plane,
-            ResponseMethod.Sampled,
-            trace,
-            LoopStability.IsStableInZ(closed.Denominator),
-            steady,
-            StepFigures.FromSamples(trace, steady),
-            equivalent.Length == 0 ? null : SecondOrderEstimate.FromPoles(equivalent, model.DelaySeconds),
-            null,
-            model.SamplingWarning(values));
     }
 
     private static LoopResponse Failed(LoopPlane plane, string why) =>

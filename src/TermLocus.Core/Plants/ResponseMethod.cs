@@ -22,6 +22,18 @@ public enum ResponseMethod
     /// </summary>
     PadeDelay,
 
-    /// <summary>A sampled loop: the output at the sample instants, exact (<see cref="Time.StepResponse.SimulateSampled"/>).</summary>
+    /// <summary>
+    /// A sampled loop: the output at the sample instants alone, exact (<see cref="Time.StepResponse.SimulateSampled"/>).
+    /// Since <see cref="SampledBetweenSamples"/>, only when the loop's parts do not allow the hybrid simulation (a
+    /// controller with more zeros than poles in z, a plant or sensor improper on its own, or a singular sample instant);
+    /// <see cref="LoopResponse.Warning"/> says why.
+    /// </summary>
     Sampled,
+
+    /// <summary>
+    /// A sampled loop simulated as the hybrid system it is (<see cref="Time.HeldLoopResponse"/>): the trace is the
+    /// plant output between the sample instants as well, the figures are measured on it, and the output at the
+    /// instants with its own figures is in <see cref="LoopResponse.SampleTrace"/> and <see cref="LoopResponse.SampleFigures"/>.
+    /// </summary>
+    SampledBetweenSamples,
 }

@@ -78,6 +78,14 @@ internal sealed class SampledLoopPath : LoopPath
 
     public override Fraction[] CancellableFactors(Fraction[] factors) => factors;
 
+    /// <summary>C(z), G(s), H(s) and the denominator of (G·H)_τ(z) at these values, for the hybrid simulation.</summary>
+    /// <exception cref="PlantFileException">A part cannot be formed, or plant·sensor cannot be held, at these values.</exception>
+    public SampledLoopParts Parts(double[] slots) => new(
+        Evaluate(controller, slots).ToRationalFunction(),
+        Usable(plant.Evaluate(slots)).ToRationalFunction(),
+        Usable(Evaluate(sensor, slots)).ToRationalFunction(),
+        HeldPlantAndSensor(slots).Denominator);
+
     /// <summary>G·H formed in s (nothing cancelled), for the hold-accuracy estimate.</summary>
     public RationalFunction PlantAndSensor(double[] slots) =>
         Usable(Fraction.Multiply(plant.Evaluate(slots), Evaluate(sensor, slots))).ToRationalFunction();

@@ -69,21 +69,39 @@ public sealed record StepFigures(
     /// are not strictly increasing or a value is not finite.
     /// </summary>
     public static StepFigures? From(IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState) =>
-        From(times, outputs, steadyState, refinePeak: true);
+        From(times, outputs, steadyState, static _ => true);
 
     /// <summary>
     /// The figures of a sampled loop's output sequence (<see cref="StepResponse.SimulateSampled"/>): as
     /// <see cref="From(ResponseTrace, double?)"/>, except that the peak is the largest sample itself, not a parabola
-    /// through three samples, since nothing is known between the sample instants. Rise and settling times are still
+    /// through three samples, since only the instants are given (the output between them is
+    /// <see cref="HeldLoopResponse"/>'s, measured by <see cref="FromBetweenSamples"/>). Rise and settling times are still
     /// interpolated linearly between samples.
     /// </summary>
     public static StepFigures? FromSamples(ResponseTrace trace, double? steadyState)
     {
         ArgumentNullException.ThrowIfNull(trace);
-        return From(trace.Times, trace.Outputs, steadyState, refinePeak: false);
+        return From(trace.Times, trace.Outputs, steadyState, static _ => false);
     }
 
-    private static StepFigures? From(IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState, bool refinePeak)
+    /// <summary>
+    /// The figures of a sampled loop's plant output between samples (<see cref="SampledLoopTrace.BetweenSamples"/>,
+    /// <paramref name="pointsPerSample"/> points per interval, &gt;= 1): as <see cref="From(ResponseTrace, double?)"/>,
+    /// except that the peak is refined by a parabola only when its point and both neighbours lie inside one sample
+    /// interval. At a sample instant the held input switches and the output's slope (or, with feed-through, the output
+    /// itself) jumps, so a parabola through a kink would overstate the peak; there the largest point is taken.
+    /// Throws <see cref="ArgumentOutOfRangeException"/> for <paramref name="pointsPerSample"/> below 1, else as the other
+    /// overloads.
+    /// </summary>
+    public static StepFigures? FromBetweenSamples(ResponseTrace trace, double? steadyState, int pointsPerSample)
+    {
+        ArgumentNullException.ThrowIfNull(trace);
+        ArgumentOutOfRangeException.ThrowIfLessThan(pointsPerSample, 1);
+        return From(trace.Times, trace.Outputs, steadyState, i => i % pointsPerSample != 0 && i % pointsPerSample != pointsPerSample - 1);
+    }
+
+    // canRefine(i): whether the peak at point i may be refined by a parabola through points i − 1, i, i + 1.
+    private static StepFigures? From(IReadOnlyList<double> times, IReadOnlyList<double> outputs, double? steadyState, Func<int, bool> canRefine)
     {
         ArgumentNullException.ThrowIfNull(times);
         ArgumentNullException.ThrowIfNull(outputs);
@@ -104,7 +122,7 @@ public sealed record StepFigures(
         }
 
         var r = outputs.Select(y => y / final).ToArray();
-        var (peakTime, peak) = Peak(times, r, refinePeak);
+        var (peakTime, peak) = Peak(times, r, canRefine);
         bool overshoots = peak > 1.0;
         return new StepFigures(
             final,
@@ -169,7 +187,7 @@ public sealed record StepFigures(
         return t[k - 1] + (Math.Clamp(fraction, 0.0, 1.0) * (t[k] - t[k - 1]));
     }
 
-    private static (double Time, double Value) Peak(IReadOnlyList<double> t, double[] r, bool refine)
+    private static (double Time, double Value) Peak(IReadOnlyList<double> t, double[] r, Func<int, bool> canRefine)
     {
         int best = 0;
         for (int k = 1; k < r.Length; k++)
@@ -180,7 +198,7 @@ public sealed record StepFigures(
             }
         }
 
-        if (!refine || best == 0 || best == r.Length - 1)
+        if (best == 0 || best == r.Length - 1 || !canRefine(best))
         {
             return (t[best], r[best]);
         }

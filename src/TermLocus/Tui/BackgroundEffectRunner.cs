@@ -5,8 +5,9 @@ namespace TermLocus.Tui;
 
 /// <summary>
 /// Runs slow effects (reading, tracing, checking, simulating, saving) on the thread pool and posts the result back
-/// with <see cref="IApplication.Invoke(Action)"/>. Band checks and step responses follow every keystroke, so of those
-/// only the newest waiting one runs (one of each kind at a time): holding an arrow key never queues up stale work.
+/// with <see cref="IApplication.Invoke(Action)"/>. Band checks and step responses follow every keystroke, and file
+/// checks every write another program makes, so of those only the newest waiting one runs (one of each kind at a
+/// time): holding an arrow key or an editor's burst of writes never queues up stale work.
 /// The recovery file is written in line: the program is about to exit.
 /// </summary>
 internal sealed class BackgroundEffectRunner(IApplication app, EffectWorker worker) : EffectRunner
@@ -26,7 +27,7 @@ internal sealed class BackgroundEffectRunner(IApplication app, EffectWorker work
                 }
 
                 return;
-            case CheckBandEffect or SimulateResponseEffect:
+            case CheckBandEffect or SimulateResponseEffect or CheckPlantFileEffect:
                 RunNewest(effect, deliver);
                 return;
             default:

@@ -98,7 +98,7 @@ internal sealed class KeyRouter
         {
             controller.Dispatch(command);
         }
-        else if (state.Overlay is ValueEntryOverlay or SaveOverlay && chord.Special == SpecialKey.None && !chord.Ctrl)
+        else if (KeyMap.TypesText(state) && chord.Special == SpecialKey.None && !chord.Ctrl)
         {
             controller.Receive(new CharacterTyped(chord.Character));
         }

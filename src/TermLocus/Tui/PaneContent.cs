@@ -15,7 +15,7 @@ internal static class PaneContent
             .Select((line, i) => new StyledLine(line, i switch
             {
                 0 => Tone.Heading,
-                3 when state.Unsaved => Tone.Warning,
+                3 or 4 when line.StartsWith(g.Violated, StringComparison.Ordinal) => Tone.Warning,
                 _ => Tone.Normal,
             }))
             .ToList();
@@ -72,8 +72,13 @@ internal static class PaneContent
 
     public static IReadOnlyList<StyledLine> SaveDialog(WorkbenchState state, SaveOverlay dialog, int width, Glyphs g) =>
         OverlayPresenter.SaveDialog(state, dialog, width, g)
-            .Select(l => new StyledLine(l, l.StartsWith(g.Selected, StringComparison.Ordinal) ? Tone.Heading : Tone.Normal))
+            .Select(l => new StyledLine(l, l.StartsWith(g.Selected, StringComparison.Ordinal) ? Tone.Heading
+                : l.StartsWith(g.Violated + " ", StringComparison.Ordinal) ? Tone.Warning : Tone.Normal))
             .ToList();
+
+    /// <summary>Lines whose warning mark starts them (after any indent) drawn as warnings, the rest plain.</summary>
+    public static IReadOnlyList<StyledLine> Marked(IEnumerable<string> lines, Glyphs g) =>
+        lines.Select(l => new StyledLine(l, l.TrimStart().StartsWith(g.Violated + " ", StringComparison.Ordinal) ? Tone.Warning : Tone.Normal)).ToList();
 
     public static IReadOnlyList<StyledLine> QuitConfirm(WorkbenchState state, int width, Glyphs g) =>
         OverlayPresenter.QuitConfirm(state, width, g).Select(l => new StyledLine(l, Tone.Normal)).ToList();

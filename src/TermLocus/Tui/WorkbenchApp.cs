@@ -1,4 +1,5 @@
 using TermLocus.App.Canvas;
+using TermLocus.App.Text;
 using TermLocus.App.Workbench;
 using Terminal.Gui.App;
 using Terminal.Gui.Drivers;
@@ -39,11 +40,16 @@ public static class WorkbenchApp
 
         var symbols = SymbolChoice.Detect(environment, options.Symbols);
         bool colour = !options.NoColor && string.IsNullOrEmpty(environment.GetValueOrDefault("NO_COLOR"));
-        var (crash, signalExit) = RunScreen(plantFile, folder, symbols, colour, options.NoMouse);
+        var (crash, signalExit, recovery) = RunScreen(plantFile, folder, symbols, colour, options.NoMouse);
         if (crash is not null)
         {
             stderr.WriteLine($"termlocus: internal error: {crash.GetType().Name}: {crash.Message}");
             stderr.WriteLine(crash.StackTrace);
+            foreach (string line in recovery)
+            {
+                stderr.WriteLine("termlocus: " + SafeText.Visible(line));
+            }
+
             return 70;
         }
 
@@ -73,45 +79,58 @@ public static class WorkbenchApp
 
     // Everything that touches the terminal lives here, so that it is restored (by disposing the application) before
     // anything is printed.
-    private static (Exception? Crash, int ExitCode) RunScreen(string? plantFile, string? folder, CanvasSymbols symbols, bool colour, bool noMouse)
+    private static (Exception? Crash, int ExitCode, IReadOnlyList<string> Recovery) RunScreen(string? plantFile, string? folder, CanvasSymbols symbols, bool colour, bool noMouse)
     {
         int exitCode = 0;
         var (state, effects) = Update.Start(plantFile, folder);
         var worker = new EffectWorker(new SaveContext(() => DateTimeOffset.UtcNow, $"{Environment.UserName}@{Environment.MachineName}"));
         using IApplication app = Application.Create();
+        var quietInput = QuietInputInstaller.TryInstall(app);
         app.Init(DriverRegistry.Names.ANSI);
         TerminalSetup.Configure(app, noMouse);
 
         var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
         using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);
         KeyRouter.Install(app, controller, screen);
+        using var watch = new PlantFileWatch(controller, action => app.Invoke(action));
         using var signals = new SignalGuard(
             stop: code =>
             {
                 exitCode = code;
                 app.Invoke(controller.EmergencyExit);
             },
-            hangUp: () => WriteRecovery(controller.State, worker));
+            hangUp: () => _ = WriteRecovery(controller.State, worker));
         controller.Start(effects);
         try
         {
             app.Run(screen);
-            return (null, exitCode);
+            return (null, exitCode, []);
         }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
             // Keep the user's value before the terminal is restored and the report printed.
-            WriteRecovery(controller.State, worker);
-            return (e, 70);
+            return (e, 70, WriteRecovery(controller.State, worker));
+        }
+        finally
+        {
+            // Disposing the application waits for the input loop, which may be blocked waiting for a key.
+            quietInput?.WakeUp();
         }
     }
 
     // The state is immutable, so reading it from another thread is safe; Update decides whether anything is unsaved.
-    private static void WriteRecovery(WorkbenchState state, EffectWorker worker)
+    // Returns what became of each unsaved value, for the report printed once the terminal is restored (after a
+    // hang-up there is no terminal, and nobody to tell).
+    private static List<string> WriteRecovery(WorkbenchState state, EffectWorker worker)
     {
+        var outcome = new List<string>();
         foreach (var effect in Update.Apply(state, Command.QuitNow).Effects.OfType<SaveRecoveryEffect>())
         {
-            worker.Perform(effect);
+            outcome.Add(worker.Perform(effect) is OperatingPointSaveFailed failed
+                ? failed.Problem
+                : $"the unsaved value was kept in {SaveRecoveryEffect.RecoveryPathFor(effect.Loaded.Document?.Path ?? "the plant file")}; it is offered when the plant is opened next");
         }
+
+        return outcome;
     }
 }

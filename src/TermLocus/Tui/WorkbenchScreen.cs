@@ -140,11 +140,21 @@ internal sealed class WorkbenchScreen : Runnable
             LibraryOverlay => layout.OverlayBox(100, state.Library.Items.Length + 4),
             ValueEntryOverlay => layout.OverlayBox(52, 7),
             SaveOverlay => layout.OverlayBox(76, 10),
+            // Boxes about files are as tall as their words at the width they get, frame included.
+            SaveConflictOverlay c => FileBox(FileOverlayPresenter.SaveConflict(state, c, FileBoxInner(), glyphs).Length),
+            SaveAsOverlay b => FileBox(FileOverlayPresenter.SaveAs(state, b, FileBoxInner(), glyphs).Length),
+            RecoveryOverlay r => FileBox(FileOverlayPresenter.Recovery(state, r, FileBoxInner(), glyphs).Length),
             QuitConfirmOverlay => layout.OverlayBox(72, 6),
             _ => Box.Empty,
         };
         PlaceAt(overlay, box);
     }
+
+    private const int FileBoxWidth = 76;
+
+    private int FileBoxInner() => Math.Max(1, Math.Min(FileBoxWidth, layout.Screen.Width - 4) - 2);
+
+    private Box FileBox(int lines) => layout.OverlayBox(FileBoxWidth, lines + 2);
 
     private IReadOnlyList<StyledLine> OverlayContent(int width, int height) => State.Overlay switch
     {
@@ -152,6 +162,9 @@ internal sealed class WorkbenchScreen : Runnable
         LibraryOverlay open => PaneContent.Library(State, open.Selected, width, height, glyphs),
         ValueEntryOverlay entry => PaneContent.ValueEntry(State, entry, width, glyphs),
         SaveOverlay dialog => PaneContent.SaveDialog(State, dialog, width, glyphs),
+        SaveConflictOverlay conflict => PaneContent.Marked(FileOverlayPresenter.SaveConflict(State, conflict, width, glyphs), glyphs),
+        SaveAsOverlay box => PaneContent.Marked(FileOverlayPresenter.SaveAs(State, box, width, glyphs), glyphs),
+        RecoveryOverlay recovery => PaneContent.Marked(FileOverlayPresenter.Recovery(State, recovery, width, glyphs), glyphs),
         QuitConfirmOverlay => PaneContent.QuitConfirm(State, width, glyphs),
         _ => [],
     };
@@ -210,7 +223,7 @@ internal sealed class WorkbenchScreen : Runnable
     private static object ResponseInputs(WorkbenchState s) =>
         (s.ShowsResponse, s.Session?.Response, s.Session?.Loaded.Plant.Specs);
 
-    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep, s.Session?.Varied);
+    private static object ParameterInputs(WorkbenchState s) => (s.Session?.Loaded, s.Session?.Sweep, s.Session?.Varied, s.Session?.Disk);
 
     private static object PoleInputs(WorkbenchState s) =>
         (s.Session?.Poles, s.Session?.SelectedPole, s.Focus, s.Overlay is NoOverlay);
@@ -235,6 +248,10 @@ internal sealed class WorkbenchScreen : Runnable
             LibraryOverlay => "plant library",
             ValueEntryOverlay => "type a value",
             SaveOverlay => "save the operating point",
+            SaveConflictOverlay { Reason: FileOnDisk.Missing } => "the plant file is gone",
+            SaveConflictOverlay => "the plant file changed on disk",
+            SaveAsOverlay => "save under another name",
+            RecoveryOverlay => "recovery file found",
             QuitConfirmOverlay => "quit?",
             _ => string.Empty,
         };

@@ -45,6 +45,21 @@ internal static class BandPlants
         new Specs(MaxTimeToHalfSeconds: 0.12),
         []));
 
+    /// <summary>
+    /// A sampled motor loop K/(s(s + 1)) behind a zero-order hold, T = 1 s, K = 1 nominal: the samples peak at 1.3996
+    /// (39.96 %) at k = 3 and 4 (Ogata, Discrete-Time Control Systems, 2nd ed., ch. 4; from memory) and the plant
+    /// output between them at 44.88 % (brute-force integration in the Core tests).
+    /// </summary>
+    public static LoadedPlant SampledMotor(Specs? specs = null) => CoreBridgeFor(new Plant(
+        TestPlants.Folder + "/sampled-motor.toml",
+        "Sampled motor loop (invented example)",
+        string.Empty,
+        [new Parameter("K", 1, new Interval(0, 3), null, string.Empty, string.Empty, new SourcePosition(5, 1))],
+        new LoopDefinition(
+            ExpressionText.Inline("plant", "K / (s * (s + 1))"), null, null, FeedbackSign.Negative, null, "K", null, null, 1.0),
+        specs ?? Specs.None,
+        []));
+
     /// <summary>A state with <paramref name="loaded"/> open, its band check delivered and its trace requested (not delivered).</summary>
     public static WorkbenchState Opened(LoadedPlant loaded)
     {

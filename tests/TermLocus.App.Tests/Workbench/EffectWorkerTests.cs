@@ -93,8 +93,9 @@ public sealed class EffectWorkerTests : IDisposable
         var loaded = ((PlantLoaded)worker.Perform(new LoadPlantEffect(Conveyor))!).Loaded;
         File.AppendAllText(Conveyor, "# edited by someone else\n");
         string edited = File.ReadAllText(Conveyor);
-        var failed = Assert.IsType<OperatingPointSaveFailed>(worker.Perform(new SaveOperatingPointEffect(loaded, 8, "v", false)));
-        Assert.Contains("changed on disk", failed.Problem, StringComparison.Ordinal);
+        var refused = Assert.IsType<SaveRefused>(worker.Perform(new SaveOperatingPointEffect(loaded, 8, "v", false)));
+        Assert.Equal(SaveRefusal.FileChanged, refused.Reason);
+        Assert.Contains("changed on disk", refused.Problem, StringComparison.Ordinal);
         Assert.Equal(edited, File.ReadAllText(Conveyor));
     }
 

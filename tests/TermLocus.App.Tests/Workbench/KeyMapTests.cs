@@ -63,6 +63,11 @@ public class KeyMapTests
             TestPlants.Opened() with { Overlay = new ValueEntryOverlay("1", null) },
             TestPlants.Opened() with { Overlay = new LibraryOverlay(0) },
             TestPlants.Opened() with { Overlay = new QuitConfirmOverlay() },
+            FilePlants.Unsaved() with { Overlay = new SaveConflictOverlay(FileOnDisk.Changed, "n", "n", false, "/plants/second.2.toml") },
+            FilePlants.Unsaved() with { Overlay = new SaveConflictOverlay(FileOnDisk.Missing, "n", "n", true, "/plants/second.2.toml") },
+            FilePlants.Unsaved() with { Overlay = new SaveAsOverlay("/plants/x.toml", "n", "n", false, null) },
+            FilePlants.Unsaved() with { Overlay = new RecoveryOverlay(new RecoveryFile("/plants/second.toml.recovery", default, default, "K", 6, null)) },
+            WorkbenchState.Initial(null) with { Overlay = new SaveAsOverlay(string.Empty, "n", "n", false, null) },
         };
         foreach (var state in states)
         {

@@ -65,6 +65,53 @@ public class ResponsePaneTests
     }
 
     [Fact]
+    public void A_sampled_loop_draws_the_output_between_samples_and_marks_the_instants()
+    {
+        // Ogata's sampled motor loop (BandPlants.SampledMotor): the samples at 3 s and 4 s (1.3996, both 'o') sit below
+        // the peak between them (@, 44.88 %). 36 instants over 35 s on 97 columns: 2.8 columns apart, so each is marked.
+        var state = BandPlants.Apply(BandPlants.Opened(BandPlants.SampledMotor()), Command.ToggleResponse);
+        var response = state.Session!.Response!.Response!;
+        var lines = ResponsePanePresenter.Lines(state.Session, 160, 16, CanvasSymbols.Ascii, Glyphs.Unicode);
+        Assert.Equal("   1.5          @.", lines[0][..104].TrimEnd());
+        Assert.Equal("              .o'-o.", lines[1][..104].TrimEnd());
+        Assert.Equal("     0 o+_______________________________________________________________________________________________", lines[14][..104].TrimEnd());
+        Assert.Equal(response.SampleTrace!.Count, lines.Sum(l => l[..104].Count(c => c == 'o')));
+        Assert.Equal("figure                simulated  at samples   estimate", lines[0][106..].TrimEnd());
+        Assert.Equal("overshoot %               44.88       39.96      44.53", lines[2][106..].TrimEnd());
+        Assert.Equal("simulated between samples, 10 points a sample", lines[7][106..].TrimEnd());
+        Assert.Equal("o on the curve: the sample instants", lines[9][106..].TrimEnd());
+    }
+
+    [Fact]
+    public void A_narrow_pane_gives_the_sampled_figures_a_column_of_their_own()
+    {
+        var state = BandPlants.Apply(BandPlants.Opened(BandPlants.SampledMotor()), Command.ToggleResponse);
+        var lines = ResponsePanePresenter.Lines(state.Session, 48, 14, CanvasSymbols.Ascii, Glyphs.Unicode);
+        Assert.Equal("figure           simulated    at kT  estimate", lines[8].TrimEnd());
+        Assert.Equal("overshoot %          44.88    39.96     44.53", lines[9].TrimEnd());
+        Assert.Equal("peak s               3.460    4.000     3.527", lines[10].TrimEnd());
+    }
+
+    [Fact]
+    public void Instants_too_close_to_tell_apart_are_not_marked_and_the_pane_says_so()
+    {
+        // The same 36 instants on 51 columns beside the table: 1.5 columns apart, under the 2 the plot needs.
+        var state = BandPlants.Apply(BandPlants.Opened(BandPlants.SampledMotor()), Command.ToggleResponse);
+        var lines = ResponsePanePresenter.Lines(state.Session, 114, 14, CanvasSymbols.Ascii, Glyphs.Unicode);
+        Assert.DoesNotContain(lines, l => l[..58].Contains('o', StringComparison.Ordinal));
+        Assert.Contains(lines, l => l[60..].TrimEnd() == "the sample instants lie too close to mark");
+    }
+
+    [Fact]
+    public void The_overshoot_limit_is_judged_on_the_peak_between_samples()
+    {
+        // 42 % passes at the samples (39.96 %) and fails between them (44.88 %).
+        var state = BandPlants.Apply(BandPlants.Opened(BandPlants.SampledMotor(new Specs(MaxOvershootPct: 42))), Command.ToggleResponse);
+        var lines = ResponsePanePresenter.Lines(state.Session, 48, 14, CanvasSymbols.Ascii, Glyphs.Unicode);
+        Assert.Equal("! overshoot %        44.88    39.96     44.53", lines[9].TrimEnd());
+    }
+
+    [Fact]
     public void A_loop_given_by_its_characteristic_has_no_response_and_says_why()
     {
         var state = BandPlants.Apply(BandPlants.Opened(BandPlants.SampledFirstOrder()), Command.ToggleResponse);

@@ -87,17 +87,22 @@ public class PolynomialRootsPropertyTests
     }
 
     [Fact]
-    public void Roots_agree_with_MathNets_plain_companion_eigenvalues()
+    public void Roots_are_as_accurate_as_MathNets_plain_companion_eigenvalues()
     {
         // External reference: MathNet's general eigenvalue solver on the unbalanced, unscaled companion matrix.
-        // Roots are kept at least 0.1 apart and within |s| <= 3 so both methods are accurate to about 1e-10.
+        // Roots are kept at least 0.1 apart and within |s| <= 3; up to degree 16 such clusters are ill-conditioned
+        // enough (rounding the coefficients moves a root by up to about 3e-7 relative, seed cmg50bXRXI21) that the two
+        // solvers can differ by more than either is wrong. So both are measured against the true roots: ours must
+        // be within 1e-8 of them or no further than twice the reference's own error.
         SpreadRootsInBox().Sample(expected =>
         {
             var p = Polynomial.FromRoots(expected);
             var reference = RootTestMath.MathNetCompanionEigenvalues(p);
             var roots = PolynomialRoots.Find(p);
-            Assert.True(RootTestMath.MaxMatchedRelativeDistance(reference, roots) <= 1e-8);
-        }, iter: 200);
+            double ours = RootTestMath.MaxMatchedRelativeDistance(expected, roots);
+            double theirs = RootTestMath.MaxMatchedRelativeDistance(expected, reference);
+            Assert.True(ours <= Math.Max(1e-8, 2 * theirs), $"ours {ours:E2}, reference {theirs:E2} from the true roots");
+        }, iter: int.Parse(Environment.GetEnvironmentVariable("ROOTS_ITER") ?? "200", System.Globalization.CultureInfo.InvariantCulture));
     }
 
     [Fact]

@@ -181,4 +181,44 @@ public sealed class AtomicFileSaverTests : IDisposable
         Assert.Equal(NewBytes, File.ReadAllBytes(path));
         Assert.Equal(SaveOutcome.Failed, AtomicFileSaver.TryWriteFile(folder.File("no/such/folder.toml"), NewBytes, overwrite: true).Outcome);
     }
+    [Fact]
+    public void A_new_file_can_take_the_permission_bits_of_the_file_it_was_made_from()
+    {
+        if (OperatingSystem.IsWindows())
+        {
+            return;
+        }
+
+        var plant = Original();
+        const UnixFileMode mode = UnixFileMode.UserRead | UnixFileMode.UserWrite; // private: a copy must not be readable by more people
+        File.SetUnixFileMode(plant, mode);
+        var recovery = folder.File("plant.toml.recovery");
+
+        var result = AtomicFileSaver.TryWriteFile(recovery, NewBytes, overwrite: true, permissionsOf: plant);
+
+        Assert.Equal(SaveOutcome.Saved, result.Outcome);
+        Assert.Equal(mode, File.GetUnixFileMode(recovery));
+        Assert.Equal(NewBytes, File.ReadAllBytes(recovery));
+        // An existing file keeps its own bits, whatever the model's.
+        File.SetUnixFileMode(recovery, mode | UnixFileMode.GroupRead);
+        Assert.Equal(SaveOutcome.Saved, AtomicFileSaver.TryWriteFile(recovery, OldBytes, overwrite: true, permissionsOf: plant).Outcome);
+        Assert.Equal(mode | UnixFileMode.GroupRead, File.GetUnixFileMode(recovery));
+    }
+
+    [Fact]
+    public void A_new_file_in_a_folder_marked_read_only_is_refused_even_for_root()
+    {
+        if (OperatingSystem.IsWindows())
+        {
+            return;
+        }
+
+        File.SetUnixFileMode(folder.Path, UnixFileMode.UserRead | UnixFileMode.UserExecute);
+
+        var result = AtomicFileSaver.TryWriteFile(folder.File("plant.toml.recovery"), NewBytes, overwrite: true);
+
+        Assert.Equal(SaveOutcome.ReadOnlyFolder, result.Outcome);
+        Assert.StartsWith($"the folder {folder.Path} is read-only", result.Message, StringComparison.Ordinal);
+        Assert.Empty(Directory.GetFiles(folder.Path));
+    }
 }

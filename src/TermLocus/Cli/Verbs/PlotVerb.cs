@@ -48,9 +48,7 @@ internal sealed class PlotVerb : IVerb
     private static bool Misses(System.Numerics.Complex root, LoopCheckResult check, LoopPlane plane)
     {
         var s = plane.ToEquivalentS(root);
-        return check.Nominal.Violations.Any(v =>
-            System.Numerics.Complex.Abs(v.Pole - s) < 1e-9 * Math.Max(1, System.Numerics.Complex.Abs(s))
-            || System.Numerics.Complex.Abs(v.Pole - System.Numerics.Complex.Conjugate(s)) < 1e-9 * Math.Max(1, System.Numerics.Complex.Abs(s)));
+        return check.Nominal.Violations.Any(v => ConjugatePair.Matches(v.Pole, s));
     }
 
     private static (int Columns, int Rows) ParseSize(string text)

@@ -5,12 +5,15 @@ using TermLocus.App.Reports;
 using TermLocus.App.Text;
 using TermLocus.Cli.Json;
 using TermLocus.Core.Plants;
+using TermLocus.Core.Time;
 
 namespace TermLocus.Cli.Verbs;
 
 /// <summary><c>termlocus response FILE [--json]</c>: closed-loop step response figures (and a plot in text mode).</summary>
 internal sealed class ResponseVerb : IVerb
 {
+    private const int PlotColumns = 80;
+
     /// <inheritdoc/>
     public Command Build(CliContext context)
     {
@@ -47,16 +50,36 @@ internal sealed class ResponseVerb : IVerb
         return command;
     }
 
+    // What the plotted curve is: for a sampled loop the plant output between samples (instants marked when they lie
+    // far enough apart), or the output at the instants alone.
+    private static string Caption(LoopResponse response, ResponseTrace? samples, CanvasSymbols symbols)
+    {
+        if (!response.Plane.IsSampled)
+        {
+            return string.Empty;
+        }
+
+        if (samples is null || response.Trace is not { } trace)
+        {
+            return " (output at the sample instants)";
+        }
+
+        return ResponsePlot.MarksSamples(samples, trace.Times, PlotColumns)
+            ? $" (plant output between samples, {(symbols == CanvasSymbols.Braille ? '•' : 'o')} at the sample instants)"
+            : " (plant output between samples; the instants lie too close to mark)";
+    }
+
     private static void WriteText(CliContext context, PlantInput input, LoopResponse response, CanvasSymbols symbols)
     {
         var glyphs = symbols == CanvasSymbols.Braille ? Glyphs.Unicode : Glyphs.Ascii;
         string sweep = input.Plant.Loop.Sweep;
         context.Out.WriteLine(SafeText.Fit($"{SafeText.Visible(input.File)}  {SafeText.Visible(input.Plant.Title)}", CheckReportPresenter.Width));
+        var samples = response.Method == ResponseMethod.SampledBetweenSamples ? response.SampleTrace : null;
         context.Out.WriteLine($"  step response at {SafeText.Visible(sweep)} = {NumberText.Exact(input.Values[sweep])}"
-            + (response.Plane.IsSampled ? " (output at the sample instants)" : string.Empty));
+            + Caption(response, samples, symbols));
         if (response.Trace is { } trace && response.IsAvailable)
         {
-            foreach (var line in ResponsePlot.Render(trace.Times, trace.Outputs, response.SteadyState, response.Figures?.PeakTimeSeconds, 80, 14, symbols))
+            foreach (var line in ResponsePlot.Render(trace.Times, trace.Outputs, response.SteadyState, response.Figures?.PeakTimeSeconds, PlotColumns, 14, symbols, samples))
             {
                 context.Out.WriteLine("  " + line.TrimEnd());
             }
