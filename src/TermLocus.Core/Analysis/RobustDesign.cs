@@ -25,10 +25,11 @@ namespace TermLocus.Core.Analysis;
 /// is simulated only inside the pole-feasible intervals, where every point is stable: each is sampled at 17 values,
 /// dips between samples are followed by parabolas, and each crossing of the limit is solved by bracketed regula falsi
 /// to 1e-9 of the end's own value (an end at 0 to 1e-12 of the span's scale). That is where the simulated figure
-/// crosses the limit. The simulated figure is exact at the grid instants (sampled loops: at the sample instants, all
-/// the figure claims), and between instants the peak is a parabola through three samples, at least 30 per cycle; on
-/// K/(s(s + a)) it matches the handbook overshoot to about 3e-7 of its value at 10 % and 8e-6 at 50 %, which puts a
-/// continuous loop's end 2e-7 and 2e-5 (relative) from the exact one. An excursion beyond the limit narrower than a
+/// crosses the limit. The simulated response is exact at its grid instants (a sampled loop's: the plant output between
+/// samples, 10 to 200 points a sample), and between them the peak is a parabola through three points; on K/(s(s + a))
+/// the figure matches the handbook overshoot to about 3e-7 of its value at 10 % and 8e-6 at 50 %, which puts a
+/// continuous loop's end 2e-7 and 2e-5 (relative) from the exact one; on K/(s(s + 1)) sampled every second behind a
+/// hold, 10 points a sample, the 20 % end is 1.1e-5 from the exact one. An excursion beyond the limit narrower than a
 /// sample step that no sample or parabola reveals is missed: overshoot has no boundary equations to give hints.</para>
 /// <para>The recommended value maximises the smallest relative margin, (limit − figure)/|limit| for a maximum and
 /// (figure − limit)/|limit| for a minimum (the slowest decay rate, 1/s, when the file sets no limit at all), over the
