@@ -1,9 +1,9 @@
 namespace TermLocus.Core.Analysis;
 
 /// <summary>
-/// The pole-placement limits of a plant file's <c>[specs]</c> table that are checked on closed-loop poles
-/// (overshoot is checked on a simulated response instead and has no member here). The declaration order is the
-/// order reports list them in.
+/// The limits of a plant file's <c>[specs]</c> table: all but <see cref="MaxOvershootPct"/> are checked on the
+/// closed-loop poles; overshoot is checked on the simulated step response. The declaration order is the order reports
+/// list them in.
 /// </summary>
 public enum SpecKind
 {

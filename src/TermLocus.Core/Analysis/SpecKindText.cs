@@ -29,7 +29,7 @@ public static class SpecKindText
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Unknown spec kind."),
     };
 
-    /// <summary>The kind for a plant-file key (exact, lower case); false for any other text, including <c>max_overshoot_pct</c>.</summary>
+    /// <summary>The kind for a plant-file key of <c>[specs]</c> (exact, lower case); false for any other text.</summary>
     public static bool TryParseKey(string? key, out SpecKind kind)
     {
         SpecKind? parsed = key switch
