@@ -74,7 +74,14 @@ public static class CheckReportPresenter
         return tightest is null
             ? $"verdict: pass {glyphs.Met} stable; the file sets no specs"
             : $"verdict: pass {glyphs.Met} every spec met across the band; least margin {tightest.Key} "
-              + $"{NumberText.Significant(tightest.WorstMargin)} at {BandWording.Point(result.Box, tightest.At)}";
+              + $"{NumberText.Significant(tightest.WorstMargin)}{UnitSuffix(tightest.Spec)} at {BandWording.Point(result.Box, tightest.At)}";
+    }
+
+    // The margin is in the limit's own unit (percentage points for overshoot), so it reads as "13.82 s", not a bare number.
+    private static string UnitSuffix(SpecKind spec)
+    {
+        string unit = spec.Unit();
+        return unit.Length == 0 ? string.Empty : " " + unit;
     }
 
     private static void AddSpecTable(ImmutableArray<string>.Builder lines, LoopCheckResult result, Glyphs g)
