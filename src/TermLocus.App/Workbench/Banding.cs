@@ -10,46 +10,12 @@ namespace TermLocus.App.Workbench;
 /// </summary>
 internal static class Banding
 {
-    public static (WorkbenchState, ImmutableArray<Effect>) Step(WorkbenchState s, int direction)
-    {
-        if (s.Session is not { } session)
-        {
-            return Update.NoPlant(s);
-        }
+    public static (WorkbenchState, ImmutableArray<Effect>) Step(WorkbenchState s, int direction) =>
+        WithBand(s, (_, varied) => StepWithin(s, varied, direction));
 
-        var varied = session.Varied;
-        if (varied.Parameter is null)
-        {
-            return Update.Say(s, StatusMessage.Info(NoBand(session)));
-        }
-
-        double next = varied.Next(direction);
-        if (next == varied.Value)
-        {
-            string end = direction < 0 ? "low" : "high";
-            return Update.Say(s, StatusMessage.Warning(
-                $"{varied.Parameter} is at the {end} end of its band ({NumberText.Short(next, 6)})"));
-        }
-
-        return MoveTo(s, varied with { Value = next }, null);
-    }
-
-    public static (WorkbenchState, ImmutableArray<Effect>) ToNominal(WorkbenchState s)
-    {
-        if (s.Session is not { } session)
-        {
-            return Update.NoPlant(s);
-        }
-
-        var varied = session.Varied;
-        if (varied.Parameter is null)
-        {
-            return Update.Say(s, StatusMessage.Info(NoBand(session)));
-        }
-
-        return MoveTo(s, varied with { Value = varied.Nominal }, StatusMessage.Info(
-            $"{varied.Parameter} back to nominal ({NumberText.Short(varied.Nominal, 6)})"));
-    }
+    public static (WorkbenchState, ImmutableArray<Effect>) ToNominal(WorkbenchState s) =>
+        WithBand(s, (_, varied) => MoveTo(s, varied with { Value = varied.Nominal }, StatusMessage.Info(
+            $"{varied.Parameter} back to nominal ({NumberText.Short(varied.Nominal, 6)})")));
 
     public static (WorkbenchState, ImmutableArray<Effect>) NextParameter(WorkbenchState s)
     {
@@ -78,19 +44,31 @@ internal static class Banding
             $"{session.Varied.Parameter} back to nominal"));
     }
 
-    public static (WorkbenchState, ImmutableArray<Effect>) ChangeStep(WorkbenchState s, bool finer)
+    public static (WorkbenchState, ImmutableArray<Effect>) ChangeStep(WorkbenchState s, bool finer) =>
+        WithBand(s, (session, varied) => ChangeDivisions(s, session, varied, finer));
+
+    /// <summary>"1/20 of its band (0.04 1/s)": the band step as a fraction and as a value.</summary>
+    public static string StepWords(VariedPosition varied)
     {
-        if (s.Session is not { } session)
+        string unit = varied.Unit.Length > 0 ? " " + SafeText.Visible(varied.Unit) : string.Empty;
+        return $"1/{varied.Divisions} of its band ({NumberText.Short(varied.Step, 4)}{unit})";
+    }
+
+    private static (WorkbenchState, ImmutableArray<Effect>) StepWithin(WorkbenchState s, VariedPosition varied, int direction)
+    {
+        double next = varied.Next(direction);
+        if (next == varied.Value)
         {
-            return Update.NoPlant(s);
+            string end = direction < 0 ? "low" : "high";
+            return Update.Say(s, StatusMessage.Warning(
+                $"{varied.Parameter} is at the {end} end of its band ({NumberText.Short(next, 6)})"));
         }
 
-        var varied = session.Varied;
-        if (varied.Parameter is null)
-        {
-            return Update.Say(s, StatusMessage.Info(NoBand(session)));
-        }
+        return MoveTo(s, varied with { Value = next }, null);
+    }
 
+    private static (WorkbenchState, ImmutableArray<Effect>) ChangeDivisions(WorkbenchState s, PlantSession session, VariedPosition varied, bool finer)
+    {
         int divisions = varied.NextDivisions(finer);
         if (divisions == varied.Divisions)
         {
@@ -106,11 +84,18 @@ internal static class Banding
         });
     }
 
-    /// <summary>"1/20 of its band (0.04 1/s)": the band step as a fraction and as a value.</summary>
-    public static string StepWords(VariedPosition varied)
+    // The band commands need an open plant and a toleranced parameter being varied; each says what is missing.
+    private static (WorkbenchState, ImmutableArray<Effect>) WithBand(
+        WorkbenchState s, Func<PlantSession, VariedPosition, (WorkbenchState, ImmutableArray<Effect>)> act)
     {
-        string unit = varied.Unit.Length > 0 ? " " + SafeText.Visible(varied.Unit) : string.Empty;
-        return $"1/{varied.Divisions} of its band ({NumberText.Short(varied.Step, 4)}{unit})";
+        if (s.Session is not { } session)
+        {
+            return Update.NoPlant(s);
+        }
+
+        return session.Varied.Parameter is null
+            ? Update.Say(s, StatusMessage.Info(NoBand(session)))
+            : act(session, session.Varied);
     }
 
     private static (WorkbenchState, ImmutableArray<Effect>) MoveTo(WorkbenchState s, VariedPosition varied, StatusMessage? message)

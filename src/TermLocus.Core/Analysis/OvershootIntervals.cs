@@ -40,34 +40,9 @@ internal static class OvershootIntervals
         AddDips(Margin, xs, ms);
         sampled.AddRange(xs);
 
-        var result = new List<(double, double)>();
         double floor = SignIntervals.ZeroFloorShare * scale;
-        double? start = ms[0] >= 0.0 ? from : null;
-        for (int i = 1; i < xs.Count; i++)
-        {
-            if (ms[i] >= 0.0 == ms[i - 1] >= 0.0)
-            {
-                continue;
-            }
-
-            double edge = BracketedCrossing.Solve(Margin, xs[i - 1], ms[i - 1], xs[i], ms[i], RelTol, floor);
-            if (ms[i] >= 0.0)
-            {
-                start = edge;
-            }
-            else if (start is { } s)
-            {
-                result.Add((s, edge));
-                start = null;
-            }
-        }
-
-        if (start is { } open)
-        {
-            result.Add((open, to));
-        }
-
-        return result;
+        return FeasibleRuns.Collect(
+            ms.ConvertAll(m => m >= 0.0), from, to, i => BracketedCrossing.Solve(Margin, xs[i - 1], ms[i - 1], xs[i], ms[i], RelTol, floor));
     }
 
     // A feasible sample lower than both feasible neighbours: follow the parabola through the three towards its lowest

@@ -35,34 +35,8 @@ public static class SignIntervals
             .Concat((extraPoints ?? []).Where(x => x > from && x < to))
             .Order().Distinct().ToArray();
         var ok = xs.Select(x => IsFeasible(f(x))).ToArray();
-        var result = new List<(double, double)>();
-        double? start = ok[0] ? from : null;
         double floor = ZeroFloorShare * Math.Max(to - from, Math.Max(Math.Abs(from), Math.Abs(to)));
-        for (int i = 1; i < xs.Length; i++)
-        {
-            if (ok[i] == ok[i - 1])
-            {
-                continue;
-            }
-
-            double edge = Bisect(f, xs[i - 1], xs[i], ok[i - 1], relTol, floor);
-            if (ok[i])
-            {
-                start = edge;
-            }
-            else if (start is { } s)
-            {
-                result.Add((s, edge));
-                start = null;
-            }
-        }
-
-        if (start is { } open)
-        {
-            result.Add((open, to));
-        }
-
-        return result;
+        return FeasibleRuns.Collect(ok, from, to, i => Bisect(f, xs[i - 1], xs[i], ok[i - 1], relTol, floor));
     }
 
     private static bool IsFeasible(double v) => v >= 0.0;

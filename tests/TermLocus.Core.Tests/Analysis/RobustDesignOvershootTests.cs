@@ -31,6 +31,19 @@ public class RobustDesignOvershootTests
         return RobustDesign.Find(LoopModel.Create(plant), plant.NominalValues(), plant.SweptParameter.Range!.Value);
     }
 
+    // K/(s(s + a)) with K swept over [0, highestGain] under the given [specs] lines.
+    private static DesignResult DesignTypeOne(string title, double a, double highestGain, string specs) => Design(Invariant($$"""
+        title = "{{title}}"
+        [parameters]
+        K = { value = 1.0, range = [0.0, {{highestGain:0.0}}] }
+        a = {{a}}
+        [loop]
+        plant = "K/(s*(s + a))"
+        sweep = "K"
+        [specs]
+        {{specs}}
+        """));
+
     // Standard second-order overshoot 100·exp(−πζ/√(1−ζ²)) (Ogata, Modern Control Engineering, 5th ed., Sec. 5-3,
     // from memory), solved for ζ: ζ = −ln(M)/√(π² + ln²(M)), M = overshoot/100.
     private static double DampingFor(double overshootPct)
@@ -46,17 +59,7 @@ public class RobustDesignOvershootTests
     {
         // K/(s(s + a)) closes to K/(s^2 + a s + K): ωn = √K, ζ = a/(2√K), so overshoot <= 10 % <=> K <= a^2/(4 ζ*^2).
         const double a = 2.0;
-        var result = Design(Invariant($$"""
-            title = "second-order overshoot"
-            [parameters]
-            K = { value = 1.0, range = [0.0, 20.0] }
-            a = {{a}}
-            [loop]
-            plant = "K/(s*(s + a))"
-            sweep = "K"
-            [specs]
-            max_overshoot_pct = 10
-            """));
+        var result = DesignTypeOne("second-order overshoot", a, 20.0, "max_overshoot_pct = 10");
 
         double zeta = DampingFor(10.0), upper = a * a / (4.0 * zeta * zeta); // 2.8615
         Assert.True(result.OvershootJudged);
@@ -79,18 +82,7 @@ public class RobustDesignOvershootTests
         // OS = 10 ln2 %. So the smallest margin is 1 - ln2 on [1, K(10 ln2 %)], a plateau whose middle is the
         // recommendation. Without the overshoot margin the plateau would reach 80.
         const double a = 2.0;
-        var result = Design(Invariant($$"""
-            title = "second-order overshoot and decay"
-            [parameters]
-            K = { value = 1.0, range = [0.0, 80.0] }
-            a = {{a}}
-            [loop]
-            plant = "K/(s*(s + a))"
-            sweep = "K"
-            [specs]
-            max_time_to_half = 1.0
-            max_overshoot_pct = 10
-            """));
+        var result = DesignTypeOne("second-order overshoot and decay", a, 80.0, "max_time_to_half = 1.0\nmax_overshoot_pct = 10");
 
         double ln2 = Math.Log(2.0);
         double lower = 1.0 - ((1.0 - ln2) * (1.0 - ln2));                      // σ = ln2: 0.9058

@@ -1,4 +1,5 @@
 using System.Runtime.Versioning;
+using TermLocus.Tests.Cli;
 
 namespace TermLocus.Tests.Crash;
 
@@ -9,6 +10,12 @@ namespace TermLocus.Tests.Crash;
 [UnsupportedOSPlatform("windows")]
 internal sealed class CrashFolder : IDisposable
 {
+    /// <summary>
+    /// The mode the plant file is given: not what a umask gives a new file, so a save that loses the bits shows, and
+    /// private to owner and group, so a recovery copy that kept it is no more readable than the plant.
+    /// </summary>
+    public const UnixFileMode PlantMode = UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead;
+
     public CrashFolder()
     {
         Root = Directory.CreateDirectory(Path.Combine(Path.GetTempPath(), "termlocus-crash-" + Guid.NewGuid().ToString("N"))).FullName;
@@ -20,6 +27,13 @@ internal sealed class CrashFolder : IDisposable
     public string Library { get; }
 
     public string Plant => Path.Combine(Library, "plant.toml");
+
+    /// <summary>Copies the conveyor demo plant to <see cref="Plant"/> with <see cref="PlantMode"/>.</summary>
+    public void PlaceDemoPlant()
+    {
+        File.Copy(RepoFiles.Plant("conveyor-speed.toml"), Plant);
+        File.SetUnixFileMode(Plant, PlantMode);
+    }
 
     public string Sub(string name) => Directory.CreateDirectory(Path.Combine(Root, name)).FullName;
 

@@ -8,6 +8,17 @@ namespace TermLocus.Tests.Crash;
 /// <param name="Delay">How long after "ready" the SIGKILL was sent.</param>
 internal sealed record KillReport(long? LastDone, long? OpenSave, TimeSpan Delay)
 {
+    /// <summary>
+    /// The save whose version the file holds, by <paramref name="holds"/>: the last finished one (or
+    /// <paramref name="before"/>, the one held before this child, when it finished none), else the one open at the
+    /// kill, else null (no version allowed).
+    /// </summary>
+    public long? VersionHeld(long before, Func<long, bool> holds)
+    {
+        long settled = LastDone ?? before;
+        return holds(settled) ? settled : OpenSave is { } open && holds(open) ? open : null;
+    }
+
     /// <summary>Reads the "begin K" / "done K" lines the driver wrote.</summary>
     public static KillReport Parse(IEnumerable<string> lines, TimeSpan delay)
     {

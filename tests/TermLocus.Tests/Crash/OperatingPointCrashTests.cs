@@ -1,8 +1,6 @@
 using System.Globalization;
 using System.Runtime.Versioning;
-using System.Security.Cryptography;
 using TermLocus.Core.Plants;
-using TermLocus.Tests.Cli;
 using Xunit.Abstractions;
 
 namespace TermLocus.Tests.Crash;
@@ -18,9 +16,6 @@ namespace TermLocus.Tests.Crash;
 [UnsupportedOSPlatform("windows")]
 public sealed class OperatingPointCrashTests(ITestOutputHelper output) : IDisposable
 {
-    // Not what a umask gives a new file, so a save that loses the bits shows.
-    private const UnixFileMode PlantMode = UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead;
-
     private static readonly double[] Values = [6.5, 12.25, 7.5, 14.125];
 
     private static readonly string LongNote = string.Concat(Enumerable.Repeat("bench log: belt loaded, speed held; ", 7000));
@@ -34,29 +29,18 @@ public sealed class OperatingPointCrashTests(ITestOutputHelper output) : IDispos
     {
         int runs = CrashSettings.Runs(200);
 
-        var tally = KillSaves(runs, inPlace: false);
-
-        output.WriteLine(tally.Summary);
-        Assert.Empty(tally.Problems);
-        Assert.Equal(runs, tally.Runs);
-        Assert.True(tally.InSave >= runs / 2, "most kills should land inside a save: " + tally.Summary);
-        Assert.True(tally.TempAtKill > 0, "some kills should land inside the write: " + tally.Summary);
+        KillTallyAssert.EveryVersionWhole(KillSaves(runs, inPlace: false), runs, output, "inside a save", "inside the write");
     }
 
     [UnixFact]
     public void The_harness_catches_a_writer_that_rewrites_the_file_in_place()
     {
-        var tally = KillSaves(200, inPlace: true);
-
-        output.WriteLine(tally.Summary);
-        Assert.NotEmpty(tally.Problems);
-        Assert.Contains("is not a version saved whole", tally.Problems[0], StringComparison.Ordinal);
+        KillTallyAssert.ProblemCaught(KillSaves(200, inPlace: true), output, "is not a version saved whole");
     }
 
     private KillTally KillSaves(int runs, bool inPlace)
     {
-        File.Copy(RepoFiles.Plant("conveyor-speed.toml"), folder.Plant);
-        File.SetUnixFileMode(folder.Plant, PlantMode);
+        folder.PlaceDemoPlant();
         var original = File.ReadAllBytes(folder.Plant);
         var versions = WriteVersions(folder.Sub("versions"));
         bool Holds(byte[] content, long save) => content.AsSpan().SequenceEqual(save < 0 ? original : versions[save % versions.Length]);
@@ -64,12 +48,11 @@ public sealed class OperatingPointCrashTests(ITestOutputHelper output) : IDispos
         Judgement Judge(KillReport report, long before)
         {
             var content = File.ReadAllBytes(folder.Plant);
-            long settled = report.LastDone ?? before;
-            long? held = Holds(content, settled) ? settled : report.OpenSave is { } open && Holds(content, open) ? open : null;
-            var problem = PlantFolderCheck.Problem(folder.Library, folder.Plant, PlantMode, ["plant.toml"], out bool tempLeft);
+            long? held = report.VersionHeld(before, save => Holds(content, save));
+            var problem = PlantFolderCheck.Problem(folder.Library, folder.Plant, CrashFolder.PlantMode, ["plant.toml"], out bool tempLeft);
             if (held is null)
             {
-                problem = string.Create(CultureInfo.InvariantCulture, $"plant.toml ({content.Length} bytes, SHA-256 {Convert.ToHexString(SHA256.HashData(content))[..12]}) is not a version saved whole");
+                problem = $"plant.toml ({ContentFingerprint.Of(content)}) is not a version saved whole";
             }
 
             return new Judgement(held, tempLeft, problem);

@@ -1,9 +1,7 @@
 using System.Globalization;
 using System.Runtime.Versioning;
-using System.Security.Cryptography;
 using TermLocus.App.Workbench;
 using TermLocus.CrashDriver;
-using TermLocus.Tests.Cli;
 using Xunit.Abstractions;
 
 namespace TermLocus.Tests.Crash;
@@ -18,9 +16,6 @@ namespace TermLocus.Tests.Crash;
 [UnsupportedOSPlatform("windows")]
 public sealed class RecoveryCrashTests(ITestOutputHelper output) : IDisposable
 {
-    // Private to the owner and group: the recovery copy must not be readable by more people than the plant file.
-    private const UnixFileMode PlantMode = UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead;
-
     private readonly CrashFolder folder = new();
 
     public void Dispose() => folder.Dispose();
@@ -30,29 +25,19 @@ public sealed class RecoveryCrashTests(ITestOutputHelper output) : IDisposable
     {
         int runs = CrashSettings.Runs(100);
 
-        var tally = KillRecoveryWrites(runs, inPlace: false);
-
-        output.WriteLine(tally.Summary);
-        Assert.Empty(tally.Problems);
-        Assert.Equal(runs, tally.Runs);
-        Assert.True(tally.InSave >= runs / 2, "most kills should land inside a write: " + tally.Summary);
-        Assert.True(tally.TempAtKill > 0, "some kills should land between creating and renaming the file: " + tally.Summary);
+        KillTallyAssert.EveryVersionWhole(
+            KillRecoveryWrites(runs, inPlace: false), runs, output, "inside a write", "between creating and renaming the file");
     }
 
     [UnixFact]
     public void The_harness_catches_a_recovery_writer_that_rewrites_the_file_in_place()
     {
-        var tally = KillRecoveryWrites(200, inPlace: true);
-
-        output.WriteLine(tally.Summary);
-        Assert.NotEmpty(tally.Problems);
-        Assert.Contains("is not a version written whole", tally.Problems[0], StringComparison.Ordinal);
+        KillTallyAssert.ProblemCaught(KillRecoveryWrites(200, inPlace: true), output, "is not a version written whole");
     }
 
     private KillTally KillRecoveryWrites(int runs, bool inPlace)
     {
-        File.Copy(RepoFiles.Plant("conveyor-speed.toml"), folder.Plant);
-        File.SetUnixFileMode(folder.Plant, PlantMode);
+        folder.PlaceDemoPlant();
         var plant = File.ReadAllBytes(folder.Plant);
         var versions = ExpectedRecoveryFiles();
         string recovery = SaveRecoveryEffect.RecoveryPathFor(folder.Plant);
@@ -61,9 +46,8 @@ public sealed class RecoveryCrashTests(ITestOutputHelper output) : IDisposable
         Judgement Judge(KillReport report, long before)
         {
             var content = File.Exists(recovery) ? File.ReadAllBytes(recovery) : null;
-            long settled = report.LastDone ?? before;
-            long? held = Holds(content, settled) ? settled : report.OpenSave is { } open && Holds(content, open) ? open : null;
-            var problem = PlantFolderCheck.Problem(folder.Library, recovery, PlantMode, ["plant.toml"], out bool tempLeft);
+            long? held = report.VersionHeld(before, write => Holds(content, write));
+            var problem = PlantFolderCheck.Problem(folder.Library, recovery, CrashFolder.PlantMode, ["plant.toml"], out bool tempLeft);
             if (!File.ReadAllBytes(folder.Plant).AsSpan().SequenceEqual(plant))
             {
                 problem = "the plant file changed";
@@ -73,7 +57,7 @@ public sealed class RecoveryCrashTests(ITestOutputHelper output) : IDisposable
             {
                 problem = content is null
                     ? "the recovery file is missing after a finished write"
-                    : string.Create(CultureInfo.InvariantCulture, $"the recovery file ({content.Length} bytes, SHA-256 {Convert.ToHexString(SHA256.HashData(content))[..12]}) is not a version written whole");
+                    : $"the recovery file ({ContentFingerprint.Of(content)}) is not a version written whole";
             }
 
             return new Judgement(held, tempLeft, problem);

@@ -2,7 +2,6 @@ using System.Globalization;
 using System.Runtime.Versioning;
 using System.Text;
 using TermLocus.Core.Plants;
-using TermLocus.Tests.Cli;
 using Xunit.Abstractions;
 
 namespace TermLocus.Tests.Crash;
@@ -16,8 +15,6 @@ namespace TermLocus.Tests.Crash;
 [UnsupportedOSPlatform("windows")]
 public sealed class SaveVerbCrashTests(ITestOutputHelper output) : IDisposable
 {
-    private const UnixFileMode PlantMode = UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead;
-
     private static readonly double[] Values = [6.5, 12.25, 7.5, 14.125];
 
     private readonly CrashFolder folder = new();
@@ -30,8 +27,7 @@ public sealed class SaveVerbCrashTests(ITestOutputHelper output) : IDisposable
         int runs = CrashSettings.Runs(40);
         int seed = CrashSettings.Seed();
         var random = new Random(seed);
-        File.Copy(RepoFiles.Plant("conveyor-speed.toml"), folder.Plant);
-        File.SetUnixFileMode(folder.Plant, PlantMode);
+        folder.PlaceDemoPlant();
         var full = WarmUp();
         var tally = new Dictionary<string, int>(StringComparer.Ordinal) { ["killed"] = 0, ["after the temporary file appeared"] = 0, ["temporary file left"] = 0, ["old"] = 0, ["new"] = 0, ["finished"] = 0 };
         string? problem = null;
@@ -77,7 +73,7 @@ public sealed class SaveVerbCrashTests(ITestOutputHelper output) : IDisposable
             ? SaveVerbRun.Run(folder.Plant, value, $"run {run}", PreciseDelay.Draw(random, full), null)
             : SaveVerbRun.Run(folder.Plant, value, $"run {run}", null, PreciseDelay.Draw(random, TimeSpan.FromMilliseconds(4)));
         var after = File.ReadAllBytes(folder.Plant);
-        var folderProblem = PlantFolderCheck.Problem(folder.Library, folder.Plant, PlantMode, ["plant.toml"], out bool tempLeft);
+        var folderProblem = PlantFolderCheck.Problem(folder.Library, folder.Plant, CrashFolder.PlantMode, ["plant.toml"], out bool tempLeft);
         bool killed = code == SaveVerbRun.KilledBySigkill;
         tally[killed ? "killed" : "finished"]++;
         tally["after the temporary file appeared"] += run % 2 == 1 && killed ? 1 : 0;
