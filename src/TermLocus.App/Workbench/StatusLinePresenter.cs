@@ -133,6 +133,8 @@ public static class StatusLinePresenter
 
     private static string MessageText(StatusMessage message) => message.Kind switch
     {
+        // A located error (FILE:LINE:COL: error: ...) says "error" itself.
+        MessageKind.Error when message.Text.Contains(": error: ", StringComparison.Ordinal) => message.Text,
         MessageKind.Error => "error: " + message.Text,
         MessageKind.Warning => message.Text,
         MessageKind.Info => message.Text,

@@ -68,6 +68,14 @@ public class StatusLinePresenterTests
     }
 
     [Fact]
+    public void A_located_error_is_not_told_twice_that_it_is_an_error()
+    {
+        var state = TestPlants.Opened() with { Message = StatusMessage.Error("broken.toml:5:20: error: expected ')'") };
+        var lines = StatusLinePresenter.Lines(state, 80, 2, Glyphs.Ascii);
+        Assert.Equal(Pad("broken.toml:5:20: error: expected ')'"), lines[1]);
+    }
+
+    [Fact]
     public void Overlays_show_their_own_hints()
     {
         var quit = TestPlants.Opened() with { Overlay = new QuitConfirmOverlay() };

@@ -60,7 +60,7 @@ public sealed class WorkbenchFileTests : IDisposable
 
         File.AppendAllText(Conveyor, "Kp = = broken\n");
         h.Press(new Key('s'), new Key('r'));
-        Assert.Contains("error: conveyor-speed.toml:28:", h.Screen(), StringComparison.Ordinal);
+        Assert.Contains("conveyor-speed.toml:28:6: error:", h.Screen(), StringComparison.Ordinal);
         Assert.Equal(7.0, h.Controller.State.Session!.Sweep.Value);
         Assert.Contains("Kp = 7 A/(rad/s)", h.Screen(), StringComparison.Ordinal);
     }
