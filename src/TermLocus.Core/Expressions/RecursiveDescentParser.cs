@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Runtime.CompilerServices;
 
 namespace TermLocus.Core.Expressions;
 
@@ -143,6 +144,15 @@ internal sealed class RecursiveDescentParser
             throw new ExpressionSyntaxException(
                 Current.Offset,
                 $"expression nested too deeply (more than {ExpressionLimits.MaxNestingDepth} levels of parentheses, signs or powers)");
+        }
+
+        // The depth limit alone is not enough: a level through a function call costs seven frames, and unoptimised
+        // (tier-0) frames on a 1 MB thread ran out of stack before 200 levels. So the stack left is asked too.
+        if (!RuntimeHelpers.TryEnsureSufficientExecutionStack())
+        {
+            throw new ExpressionSyntaxException(
+                Current.Offset,
+                $"expression nested too deeply for this thread's stack ({depth} levels of parentheses, signs, powers or functions)");
         }
 
         ExpressionNode node;

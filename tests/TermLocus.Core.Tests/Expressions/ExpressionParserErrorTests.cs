@@ -94,6 +94,35 @@ public class ExpressionParserErrorTests
     }
 
     [Fact]
+    public void Nested_functions_within_the_limit_on_a_small_stack_are_refused_not_a_crash()
+    {
+        // 199 nested calls are inside the depth limit, but at seven frames a level they need more stack than a
+        // 256 KB thread has; the parser must say so instead of overflowing (which ends the whole process).
+        string text = string.Concat(Enumerable.Repeat("sqrt(", 199)) + "s" + new string(')', 199);
+        PlantFileError? error = null;
+        Exception? failure = null;
+        var thread = new Thread(
+            () =>
+            {
+                try
+                {
+                    error = ParseError(text);
+                }
+                catch (Exception e)
+                {
+                    failure = e; // an assertion failing on this thread must reach the test, not end the process
+                }
+            },
+            256 * 1024);
+        thread.Start();
+        thread.Join();
+
+        Assert.Null(failure);
+        Assert.NotNull(error);
+        Assert.Contains("nested too deeply for this thread's stack", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void The_error_prints_as_file_line_column()
     {
         var e = ParseError("2s");
