@@ -15,6 +15,9 @@ public static class CheckReportPresenter
     /// <summary>Report width in columns (the command-line contract caps text at 100).</summary>
     public const int Width = 100;
 
+    // Wide enough for "max_settling_time 4/sigma".
+    private const int SpecColumn = 26;
+
     /// <summary>The report's lines (no trailing newline on each).</summary>
     /// <param name="file">The file as the user named it.</param>
     /// <param name="plant">The plant checked.</param>
@@ -84,6 +87,8 @@ public static class CheckReportPresenter
         return unit.Length == 0 ? string.Empty : " " + unit;
     }
 
+    // The nominal column is judged like the band column: pole limits on the poles at the values, the overshoot limit
+    // on the step response simulated at them. Each figure carries its own mark.
     private static void AddSpecTable(ImmutableArray<string>.Builder lines, LoopCheckResult result, Glyphs g)
     {
         if (result.Band.IsEmpty)
@@ -91,15 +96,42 @@ public static class CheckReportPresenter
             return;
         }
 
-        lines.Add($"  {"spec",-22}{"limit",10}{"nominal",12}{"worst in band",15}  where");
+        lines.Add($"  {"spec",-SpecColumn}{"limit",10}{"nominal",12}{"worst in band",15}  where");
         foreach (var band in result.Band)
         {
-            var nominal = result.Nominal.Outcomes.FirstOrDefault(o => o.Spec == band.Spec);
+            var (nominal, nominalMet) = NominalOf(result, band.Spec);
             string relation = SpecWording.IsMinimum(band.Key) ? g.AtLeast : g.AtMost;
-            string mark = band.Met ? " " : g.Violated;
-            lines.Add($"  {band.Key,-22}{relation + " " + NumberText.Exact(band.Limit),10}"
-                + $"{Figure(nominal?.WorstActual),12}{Figure(band.WorstActual),13} {mark}  {BandWording.Point(result.Box, band.At)}");
+            lines.Add(SafeText.Fit($"  {Label(band.Spec, g),-SpecColumn}{relation + " " + NumberText.Exact(band.Limit),10}"
+                + $"{Figure(nominal),10} {Mark(nominalMet, g)}{Figure(band.WorstActual),13} {Mark(band.Met, g)}  {BandWording.Point(result.Box, band.At)}", Width));
         }
+
+        if (result.Band.Any(b => b.Spec == SpecKind.MaxSettlingTime))
+        {
+            lines.Add($"  max_settling_time is judged as 4/{g.DecayRate} of the slowest pole, as the plant file defines it;");
+            lines.Add("  the simulated 2 % settling time (termlocus response) can differ");
+        }
+
+        if (result.Band.Any(b => b.Spec == SpecKind.MaxOvershootPct))
+        {
+            lines.Add("  max_overshoot_pct is judged on the simulated step response, at nominal and at each band corner");
+        }
+    }
+
+    // max_settling_time is 4/σ of the slowest pole by the file format's definition; the label says so.
+    private static string Label(SpecKind spec, Glyphs g) =>
+        spec == SpecKind.MaxSettlingTime ? $"{spec.Key()} 4/{g.DecayRate}" : spec.Key();
+
+    private static string Mark(bool met, Glyphs g) => met ? " " : g.Violated;
+
+    private static (double? Figure, bool Met) NominalOf(LoopCheckResult result, SpecKind spec)
+    {
+        if (spec == SpecKind.MaxOvershootPct)
+        {
+            return result.NominalOvershoot is { } o ? (o.WorstActual, o.Met) : (null, true);
+        }
+
+        var outcome = result.Nominal.Outcomes.FirstOrDefault(o => o.Spec == spec);
+        return outcome is null ? (null, true) : (outcome.WorstActual, outcome.Met);
     }
 
     private static string Figure(double? value) => value is double v ? NumberText.Significant(v) : "none";

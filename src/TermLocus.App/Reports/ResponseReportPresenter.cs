@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using TermLocus.App.Text;
 using TermLocus.App.Workbench;
+using TermLocus.Core.Analysis;
 using TermLocus.Core.Plants;
 using TermLocus.Core.Time;
 
@@ -15,7 +16,38 @@ public static class ResponseReportPresenter
 {
     /// <summary>Figure lines (no plot): steady state, rise, peak, overshoot, settling, each measured (between samples and at
     /// them, for a sampled loop) and estimated.</summary>
-    public static ImmutableArray<string> Lines(LoopResponse response, Glyphs g)
+    public static ImmutableArray<string> Lines(LoopResponse response, Glyphs g) => Lines(response, g, null);
+
+    /// <summary>
+    /// The figure lines, then, when <paramref name="settlingSpec"/> is given (the file sets <c>max_settling_time</c>),
+    /// how that spec is judged: as 4/σ of the slowest pole, with that figure, beside the simulated 2 % settling time.
+    /// </summary>
+    /// <param name="response">The simulated response.</param>
+    /// <param name="g">Symbols to use.</param>
+    /// <param name="settlingSpec">The <c>max_settling_time</c> outcome on the poles at the same values, or null.</param>
+    public static ImmutableArray<string> Lines(LoopResponse response, Glyphs g, SpecOutcome? settlingSpec)
+    {
+        var lines = ImmutableArray.CreateBuilder<string>();
+        lines.AddRange(FigureLines(response, g));
+        if (settlingSpec is { Spec: SpecKind.MaxSettlingTime } spec)
+        {
+            lines.AddRange(SettlingSpecLines(spec, response.Figures?.SettlingTime2PctSeconds, g));
+        }
+
+        return lines.ToImmutable();
+    }
+
+    // The spec's own figure (4/σ) beside the simulated one, so a pass with a longer simulated settling is not a surprise.
+    private static IEnumerable<string> SettlingSpecLines(SpecOutcome spec, double? simulated, Glyphs g)
+    {
+        string figure = spec.WorstActual is double t ? NumberText.Significant(t) + " s" : "none (a pole does not decay)";
+        yield return $"max_settling_time {g.AtMost} {NumberText.Exact(spec.Limit)} s is judged as 4/{g.DecayRate} of the slowest pole: "
+            + $"{figure} {(spec.Met ? g.Met : g.Violated)}";
+        string sim = simulated is double s ? NumberText.Significant(s) + " s" : "none";
+        yield return $"(the simulated 2 % settling time, {sim}, is shown for comparison and not judged)";
+    }
+
+    private static ImmutableArray<string> FigureLines(LoopResponse response, Glyphs g)
     {
         ArgumentNullException.ThrowIfNull(response);
         var lines = ImmutableArray.CreateBuilder<string>();

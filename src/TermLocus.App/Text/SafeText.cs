@@ -56,6 +56,13 @@ public static class SafeText
         return TextWidth.Cut(visible, Math.Max(0, width - TextWidth.Of(ellipsis))) + ellipsis;
     }
 
+    /// <summary>
+    /// True for a character a terminal may act on rather than show: C0 controls (line feed included), DEL, C1 controls
+    /// (the one-byte CSI 0x9B included) and the bidirectional and line/paragraph format controls. Surrogates are not
+    /// controls; <see cref="Visible"/> handles unpaired ones.
+    /// </summary>
+    public static bool IsControl(char c) => c < 0x20 || (c >= 0x7F && c <= 0x9F) || IsFormatControl(c);
+
     private static bool NeedsWork(string text)
     {
         foreach (char c in text)

@@ -42,6 +42,11 @@ public static class SpecWording
     /// </summary>
     public static string Violation(SpecMiss miss, Glyphs g)
     {
+        if (OvershootWording.Judges(miss.SpecKey))
+        {
+            return OvershootWording.Violation(miss);
+        }
+
         string key = SafeText.Visible(miss.SpecKey);
         string at = Location(miss.Pole, g);
         if (miss.Actual is not double actual)

@@ -29,9 +29,10 @@ public static class LoopCheck
         var band = SpecCheck.Limits(plant.Specs)
             .Select(limit => Worst(limit.Spec, limit.Limit, plant.Specs, box, full, corners, source))
             .ToImmutableArray();
-        if (OvershootCheck.Worst(model, full, box) is { } overshoot)
+        var (nominalOvershoot, worstOvershoot) = OvershootCheck.NominalAndWorst(model, full, box);
+        if (worstOvershoot is not null)
         {
-            band = band.Add(overshoot);
+            band = band.Add(worstOvershoot);
         }
 
         BandMinimum? worstDamping = poles.IsEmpty ? null
@@ -41,7 +42,23 @@ public static class LoopCheck
         bool stable = corners.All(c => c.Poles.All(source.IsStable)) && (worstDecay is null || worstDecay.At.Poles.All(source.IsStable));
         return new LoopCheckResult(
             full, poles, infinite, model.HiddenPoles(full), SpecCheck.Evaluate(plant.Specs, poles), box, band,
-            worstDamping, worstDecay, stable);
+            worstDamping, worstDecay, stable)
+        {
+            NominalOvershoot = nominalOvershoot,
+        };
+    }
+
+    /// <summary>
+    /// The pole limits alone at <paramref name="values"/> (missing names take their nominal value), from the same
+    /// closed-loop poles <see cref="Run"/> uses, without the band search or any simulation: for reports that show a
+    /// pole-based figure (such as <c>max_settling_time</c>, judged as 4/σ of the slowest pole) beside a simulated one.
+    /// </summary>
+    /// <exception cref="PlantFileException">The loop cannot be formed at these values.</exception>
+    public static SpecReport PoleSpecs(LoopModel model, IReadOnlyDictionary<string, double> values)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        var full = model.Plant.NominalValues().SetItems(values);
+        return SpecCheck.Evaluate(model.Plant.Specs, new LoopPoles(model).At(full).Finite);
     }
 
     private static double LowestDamping(IReadOnlyList<Complex> poles) =>

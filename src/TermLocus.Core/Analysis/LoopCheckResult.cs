@@ -29,6 +29,13 @@ public sealed record LoopCheckResult(
     BandMinimum? WorstDecayRate,
     bool StableAcrossBand)
 {
+    /// <summary>
+    /// The <c>max_overshoot_pct</c> limit judged on the simulated step response at <see cref="Values"/> themselves
+    /// (<see cref="BandOutcome.At"/> empty), the nominal counterpart of its <see cref="Band"/> entry; null when the
+    /// specs set no overshoot limit or there is no response to judge. <see cref="Nominal"/> holds pole limits only.
+    /// </summary>
+    public BandOutcome? NominalOvershoot { get; init; }
+
     /// <summary>True when every limit holds across the box and the loop is stable everywhere in it.</summary>
     public bool Passed => StableAcrossBand && Band.All(b => b.Met);
 

@@ -18,21 +18,33 @@ public static class OvershootCheck
     /// overshoot limit or the loop has no reference-to-output path (a file giving only the characteristic polynomial).
     /// An unstable point counts as an unbounded overshoot (margin minus infinity, actual null).
     /// </summary>
-    public static BandOutcome? Worst(LoopModel model, IReadOnlyDictionary<string, double> values, ToleranceBox box)
+    public static BandOutcome? Worst(LoopModel model, IReadOnlyDictionary<string, double> values, ToleranceBox box) =>
+        NominalAndWorst(model, values, box).Worst;
+
+    /// <summary>
+    /// The overshoot at <paramref name="values"/> themselves (its <see cref="BandOutcome.At"/> empty) and the worst over
+    /// that point and the corners, from one set of simulations; both null when the specs set no overshoot limit or the
+    /// loop has no reference-to-output path. The nominal outcome is the first point of the search, so when it is the
+    /// worst the two are the same record.
+    /// </summary>
+    public static (BandOutcome? Nominal, BandOutcome? Worst) NominalAndWorst(
+        LoopModel model, IReadOnlyDictionary<string, double> values, ToleranceBox box)
     {
         ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(box);
         if (model.Plant.Specs.MaxOvershootPct is not double limit)
         {
-            return null;
+            return (null, null);
         }
 
         var work = new Dictionary<string, double>(values, StringComparer.Ordinal);
-        BandOutcome? worst = Measure(model, work, limit, ImmutableDictionary<string, double>.Empty, atCorner: false);
-        if (worst is null)
+        BandOutcome? nominal = Measure(model, work, limit, ImmutableDictionary<string, double>.Empty, atCorner: false);
+        if (nominal is null)
         {
-            return null;
+            return (null, null);
         }
 
+        var worst = nominal;
         for (int c = 0; c < box.CornerCount; c++)
         {
             box.WriteCorner(c, work);
@@ -43,7 +55,7 @@ public static class OvershootCheck
             }
         }
 
-        return worst;
+        return (nominal, worst);
     }
 
     /// <summary>

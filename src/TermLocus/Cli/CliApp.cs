@@ -7,8 +7,11 @@ namespace TermLocus.Cli;
 /// The whole command line: parses arguments, runs the verb or the workbench, and turns every expected failure into
 /// exit code 2 with one line on stderr. Never calls Environment.Exit; never prints a stack trace for bad input.
 /// </summary>
-internal sealed class CliApp(CliContext context, Func<WorkbenchRequest, int> runWorkbench, IReadOnlyList<IVerb> verbs)
+internal sealed class CliApp(CliContext unguarded, Func<WorkbenchRequest, int> runWorkbench, IReadOnlyList<IVerb> verbs)
 {
+    // Text from plant files, file names and error messages can carry terminal controls; no verb writes around this.
+    private readonly CliContext context = TerminalSafeWriter.Guard(unguarded);
+
     /// <summary>Parses and runs <paramref name="args"/>; returns the exit code.</summary>
     public int Run(IReadOnlyList<string> args)
     {

@@ -33,7 +33,36 @@ internal static class CheckJson
         w.WriteEndArray();
         WriteWorst(w, result);
         WriteViolations(w, result);
+        WriteSpecs(w, result);
         w.WriteEndObject();
+    }
+
+    // Additive within termlocus.check/1: every limit with its nominal figure and its worst over the band, and what it
+    // is judged on (the overshoot on the simulated step response; the others, max_settling_time as 4/sigma included,
+    // on the closed-loop poles).
+    private static void WriteSpecs(Utf8JsonWriter w, LoopCheckResult result)
+    {
+        w.WriteStartArray("specs");
+        foreach (var band in result.Band)
+        {
+            bool overshoot = band.Spec == SpecKind.MaxOvershootPct;
+            var (nominal, nominalMet) = overshoot
+                ? (result.NominalOvershoot?.WorstActual, result.NominalOvershoot?.Met ?? true)
+                : result.Nominal.Outcomes.FirstOrDefault(o => o.Spec == band.Spec) is { } o ? (o.WorstActual, o.Met) : (null, true);
+            w.WriteStartObject();
+            w.WriteString("spec", band.Key);
+            w.WriteString("judged_on", overshoot ? "step_response" : band.Spec == SpecKind.MaxSettlingTime ? "poles_4_over_sigma" : "poles");
+            JsonOutput.Number(w, "limit", band.Limit);
+            JsonOutput.Number(w, "nominal", nominal);
+            w.WriteBoolean("nominal_met", nominalMet);
+            JsonOutput.Number(w, "worst", band.WorstActual);
+            JsonOutput.Number(w, "worst_margin", band.WorstMargin);
+            w.WriteBoolean("met", band.Met);
+            JsonOutput.Values(w, "corner", band.At);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
     }
 
     private static void WritePole(Utf8JsonWriter w, PoleMetrics m)

@@ -1,7 +1,9 @@
+using System.Globalization;
 using System.Numerics;
 using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
+using TermLocus.App.Text;
 
 namespace TermLocus.Cli.Json;
 
@@ -16,6 +18,8 @@ internal static class JsonOutput
         Indented = true,
         // Text from plant files is escaped by the writer; keep non-ASCII letters readable.
         Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+        // Only line feeds between tokens, so every other control character in the text lies inside a string.
+        NewLine = "\n",
     };
 
     /// <summary>Runs <paramref name="write"/> against a fresh writer and returns the UTF-8 text with a final newline.</summary>
@@ -27,7 +31,33 @@ internal static class JsonOutput
             write(writer);
         }
 
-        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+        return EscapeControls(Encoding.UTF8.GetString(stream.ToArray())) + "\n";
+    }
+
+    // The relaxed encoder lets bidirectional overrides and line separators through raw, and a terminal showing the
+    // JSON would act on them. Outside strings the writer emits only ASCII and line feeds, so any such character sits
+    // inside a string, where \uXXXX means the same character: the document stays valid and carries the same text.
+    private static string EscapeControls(string json)
+    {
+        if (!json.Any(c => c != '\n' && SafeText.IsControl(c)))
+        {
+            return json;
+        }
+
+        var sb = new StringBuilder(json.Length + 16);
+        foreach (char c in json)
+        {
+            if (c != '\n' && SafeText.IsControl(c))
+            {
+                sb.Append(CultureInfo.InvariantCulture, $"\\u{(int)c:X4}");
+            }
+            else
+            {
+                sb.Append(c);
+            }
+        }
+
+        return sb.ToString();
     }
 
     /// <summary>A number, or null when it is absent or not finite.</summary>

@@ -4,6 +4,7 @@ using TermLocus.App.Plot;
 using TermLocus.App.Reports;
 using TermLocus.App.Text;
 using TermLocus.Cli.Json;
+using TermLocus.Core.Analysis;
 using TermLocus.Core.Plants;
 using TermLocus.Core.Time;
 
@@ -85,7 +86,9 @@ internal sealed class ResponseVerb : IVerb
             }
         }
 
-        foreach (var line in ResponseReportPresenter.Lines(response, glyphs))
+        var settlingSpec = input.Plant.Specs.MaxSettlingTimeSeconds is null || !response.IsAvailable ? null
+            : LoopCheck.PoleSpecs(input.Model, input.Values).Outcomes.FirstOrDefault(o => o.Spec == SpecKind.MaxSettlingTime);
+        foreach (var line in ResponseReportPresenter.Lines(response, glyphs, settlingSpec))
         {
             context.Out.WriteLine("  " + line);
         }
