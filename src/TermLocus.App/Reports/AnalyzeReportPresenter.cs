@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-using System.Globalization;
 using System.Numerics;
 using TermLocus.App.Text;
 using TermLocus.App.Workbench;
@@ -98,5 +97,5 @@ public static class AnalyzeReportPresenter
         return string.Join(", ", shown);
     }
 
-    private static string Num(double v) => NumberText.Short(v, 6).ToString(CultureInfo.InvariantCulture);
+    private static string Num(double v) => NumberText.Short(v, 6);
 }

@@ -54,14 +54,14 @@ public static class NumberText
 
     /// <summary>
     /// The shortest spelling that reads back as the same double (for values the user chose, such as a swept value
-    /// of 0.35), in invariant culture.
+    /// of 0.35), in invariant culture, with a lower-case exponent like every other spelling here (1e-09, 2.5e+20).
     /// </summary>
     public static string Exact(double value) =>
-        StripNegativeZero(value.ToString("R", CultureInfo.InvariantCulture));
+        StripNegativeZero(value.ToString("R", CultureInfo.InvariantCulture).Replace('E', 'e'));
 
     /// <summary>
     /// <paramref name="value"/> rounded to <paramref name="digits"/> significant digits and spelt as briefly as it
-    /// reads back (12, 2.414214, 4.7E-06), for solved values where the trailing digits are noise.
+    /// reads back (12, 2.414214, 4.7e-06), for solved values where the trailing digits are noise.
     /// </summary>
     public static string Short(double value, int digits = 7)
     {

@@ -14,6 +14,8 @@ public static class LoopCheck
 {
     /// <summary>
     /// Checks <paramref name="model"/> at <paramref name="values"/> (missing names take their nominal value).
+    /// Every figure is judged at those values themselves as well as over the box, so a toleranced value given outside
+    /// its band (which callers should refuse, as the plant-file reader does) can never pass by being left out.
     /// </summary>
     /// <exception cref="PlantFileException">The loop cannot be formed at some point of the box.</exception>
     /// <exception cref="ArgumentException">A value names no parameter or is not finite.</exception>
@@ -26,8 +28,9 @@ public static class LoopCheck
         var (poles, infinite) = source.At(full);
         var box = ToleranceBox.FromPlant(plant, plant.Loop.Sweep, full);
         var corners = WorstCaseSearch.EvaluateCorners(box, full, source.Finite);
+        var nominal = new BandPoint(NominalOf(box), poles, IsCorner: false);
         var band = SpecCheck.Limits(plant.Specs)
-            .Select(limit => Worst(limit.Spec, limit.Limit, plant.Specs, box, full, corners, source))
+            .Select(limit => Worst(limit.Spec, limit.Limit, box, full, corners, nominal, source))
             .ToImmutableArray();
         var (nominalOvershoot, worstOvershoot) = OvershootCheck.NominalAndWorst(model, full, box);
         if (worstOvershoot is not null)
@@ -36,10 +39,11 @@ public static class LoopCheck
         }
 
         BandMinimum? worstDamping = poles.IsEmpty ? null
-            : WorstCaseSearch.Minimize(box, full, corners, LowestDamping, source.Finite);
+            : Lower(WorstCaseSearch.Minimize(box, full, corners, LowestDamping, source.Finite), nominal, LowestDamping);
         BandMinimum? worstDecay = poles.IsEmpty ? null
-            : WorstCaseSearch.Minimize(box, full, corners, LowestDecayRate, source.Finite);
-        bool stable = corners.All(c => c.Poles.All(source.IsStable)) && (worstDecay is null || worstDecay.At.Poles.All(source.IsStable));
+            : Lower(WorstCaseSearch.Minimize(box, full, corners, LowestDecayRate, source.Finite), nominal, LowestDecayRate);
+        bool stable = poles.All(source.IsStable) && corners.All(c => c.Poles.All(source.IsStable))
+            && (worstDecay is null || worstDecay.At.Poles.All(source.IsStable));
         return new LoopCheckResult(
             full, poles, infinite, model.HiddenPoles(full), SpecCheck.Evaluate(plant.Specs, poles), box, band,
             worstDamping, worstDecay, stable)
@@ -67,14 +71,26 @@ public static class LoopCheck
     private static double LowestDecayRate(IReadOnlyList<Complex> poles) =>
         poles.Count == 0 ? double.PositiveInfinity : poles.Min(p => -p.Real);
 
+    // The values of the toleranced parameters at the point checked. Normally inside the box, but a caller may pass
+    // one outside its band; that point is then judged as well, never skipped for lying outside the box searched.
+    private static ImmutableDictionary<string, double> NominalOf(ToleranceBox box) =>
+        box.Axes.ToImmutableDictionary(a => a.Name, a => a.Nominal, StringComparer.Ordinal);
+
+    // The worse of the box's minimum and the nominal point (the box search starts from the corners only).
+    private static BandMinimum Lower(BandMinimum inBox, BandPoint nominal, Func<IReadOnlyList<Complex>, double> figure)
+    {
+        double atNominal = figure(nominal.Poles);
+        return atNominal < inBox.Value ? new BandMinimum(atNominal, nominal) : inBox;
+    }
+
     private static BandOutcome Worst(
-        SpecKind kind, double limit, Specs specs, ToleranceBox box, IReadOnlyDictionary<string, double> values,
-        ImmutableArray<BandPoint> corners, LoopPoles source)
+        SpecKind kind, double limit, ToleranceBox box, IReadOnlyDictionary<string, double> values,
+        ImmutableArray<BandPoint> corners, BandPoint nominal, LoopPoles source)
     {
         var only = OnlyThis(kind, limit);
         double Figure(IReadOnlyList<Complex> poles) =>
             SpecCheck.Evaluate(only, poles).Outcomes is { Length: > 0 } o ? o[0].WorstRelativeMargin : double.PositiveInfinity;
-        var worst = WorstCaseSearch.Minimize(box, values, corners, Figure, source.Finite);
+        var worst = Lower(WorstCaseSearch.Minimize(box, values, corners, Figure, source.Finite), nominal, Figure);
         var outcome = SpecCheck.Evaluate(only, worst.At.Poles).Outcomes.FirstOrDefault();
         return outcome is null
             ? new BandOutcome(kind, limit, null, double.PositiveInfinity, double.PositiveInfinity, Complex.Zero, worst.At.Toleranced, worst.At.IsCorner)

@@ -10,9 +10,18 @@ namespace TermLocus.Core.Analysis;
 /// (also at the origin, where ζ itself is undefined) and non-negative on the allowed side:
 /// ζ: −Re s − ζmin·|s|; σ: −Re s − σmin; ωn,min: |s| − ωmin; ωn,max: ωmax − |s|.
 /// Sign changes of h along the traced branches are refined by Brent's method to at least 1e-9 relative.
+/// A sign change of the ζ function at the origin (a real pole changing half-plane, where ζ is undefined) is a
+/// stability crossing, not a damping boundary, and is left out; the σ and ωn boundaries are defined there and kept.
 /// </summary>
 public static class SpecBoundaries
 {
+    /// <summary>
+    /// A crossing pole within this share of the trace's scale of the origin is at the origin: the crossing value is
+    /// solved to machine precision, so such a pole sits there up to rounding (3.5e-14 against poles of 3000 rad/s
+    /// in the magnetic-bearing demo).
+    /// </summary>
+    public const double OriginShare = 1e-9;
+
     /// <summary>
     /// Traces [<paramref name="from"/>, <paramref name="to"/>] and finds every boundary crossing for the limits given
     /// (null limits are skipped). <paramref name="minDamping"/> in (-1, 1]; <paramref name="minDecayRate"/> finite, 1/s;
@@ -39,7 +48,10 @@ public static class SpecBoundaries
         var found = new List<SpecBoundary>();
         if (minDamping is { } zeta)
         {
-            found.AddRange(Crossings(family, trace, SpecBoundaryKind.MinDamping, zeta, s => -s.Real - (zeta * s.Magnitude)));
+            // h changes sign at the origin too, where a real pole changes half-plane: that is the stability
+            // crossing, reported as such, and ζ is undefined there, so it is no damping boundary.
+            found.AddRange(Crossings(family, trace, SpecBoundaryKind.MinDamping, zeta, s => -s.Real - (zeta * s.Magnitude))
+                .Where(b => b.Pole.Magnitude > OriginShare * trace.Scale));
         }
 
         if (minDecayRate is { } sigma)

@@ -18,9 +18,14 @@ public static class UnitCircleStability
     /// <summary>
     /// The stable sub-ranges of [<paramref name="from"/>, <paramref name="to"/>], ascending. Throws
     /// <see cref="ArgumentException"/> when from &gt;= to.
+    /// An end within <see cref="IsInside"/>'s margin of a span end is that span end: a root sitting on the circle
+    /// there (an integrator's z = 1 at zero gain) moves inside so slowly that rounding of the roots, not the loop,
+    /// would otherwise place the end (at 1e-9 in the 0 to 1000 span of the digital-servo demo).
     /// </summary>
     public static ImmutableArray<StableInterval> StableIntervals(CharacteristicFamily family, double from, double to) =>
-        [.. SignIntervals.Find(p => Margin(family, p), from, to, GridPoints).Select(i => new StableInterval(i.From, i.To))];
+        [.. SignIntervals.Find(p => Margin(family, p), from, to, GridPoints)
+            .Select(i => new StableInterval(ToSpanEnd(i.From, from, to), ToSpanEnd(i.To, from, to)))
+            .Where(i => i.From < i.To)];
 
     /// <summary>
     /// The unit-circle crossings inside the span: the swept value and the crossing root's angle ωT in radians
@@ -54,6 +59,9 @@ public static class UnitCircleStability
         double margin = 1e-6 * (to - from);
         return value > from + margin && value < to - margin;
     }
+
+    private static double ToSpanEnd(double value, double from, double to) =>
+        IsInside(value, from, to) ? value : value - from <= to - value ? from : to;
 
     // Positive when every root is strictly inside the unit circle.
     private static double Margin(CharacteristicFamily family, double p)

@@ -34,7 +34,8 @@ namespace TermLocus.Core.Plants;
 /// <param name="Method">How the trace was made; <see cref="ResponseMethod.None"/> with a <paramref name="Failure"/>.</param>
 /// <param name="Trace">The step response (times in seconds from the step); for a sampled loop the plant output between
 /// samples, or the output at the instants alone with <see cref="ResponseMethod.Sampled"/>; null on failure.</param>
-/// <param name="IsStable">True when every closed-loop root is strictly stable in its plane.</param>
+/// <param name="IsStable">True when every closed-loop root is strictly stable in its plane (also on failure: judged
+/// from the roots of the characteristic polynomial then).</param>
 /// <param name="SteadyState">The final value (the steady-state gain of reference to output); null when the loop is not
 /// strictly stable or on failure.</param>
 /// <param name="Figures">Rise, peak, overshoot and settling measured on the trace; null when
@@ -86,7 +87,7 @@ public sealed record LoopResponse(
         ArgumentNullException.ThrowIfNull(values);
         if (model.HasGivenCharacteristic)
         {
-            return Failed(model.Plane, "the loop gives only its characteristic polynomial, so there is no path from reference to output to simulate; give plant (and controller, sensor) instead");
+            return Failed(model, values, "the loop gives only its characteristic polynomial, so there is no path from reference to output to simulate; give plant (and controller, sensor) instead");
         }
 
         var closed = model.ReferenceToOutput(values)!;
@@ -95,7 +96,7 @@ public sealed record LoopResponse(
             string why = model.Plane.IsSampled
                 ? "the sampled closed loop is not causal (more zeros than poles in z): the controller needs at least as many poles as zeros"
                 : "the closed loop from reference to output has more zeros than poles, so its step response holds impulses";
-            return Failed(model.Plane, why);
+            return Failed(model, values, why);
         }
 
         return model.Plane.IsSampled ? SampledLoopResponse.Analyse(model, values, closed) : Continuous(model, values, closed);
@@ -111,7 +112,7 @@ public sealed record LoopResponse(
             : (ResponseMethod.Continuous, StepResponse.Simulate(closed, grid), null);
         if (trace is null)
         {
-            return Failed(model.Plane, failure!);
+            return Failed(model, values, failure!);
         }
 
         double? steady = StepFigures.SteadyStateOf(closed);
@@ -182,6 +183,15 @@ public sealed record LoopResponse(
         return new RationalFunction(forwardNumerator, open.Denominator + open.Numerator.Scale(sign));
     }
 
-    private static LoopResponse Failed(LoopPlane plane, string why) =>
-        new(plane, ResponseMethod.None, null, false, null, null, null, why, null);
+    // No trace, but stability is still known from the characteristic polynomial's roots (the ones the locus and
+    // the check use), so a stable loop without a response is not reported unstable.
+    private static LoopResponse Failed(LoopModel model, IReadOnlyDictionary<string, double> values, string why)
+    {
+        var (characteristic, roots) = model.CharacteristicAndRoots(values);
+        bool lostToInfinity = (roots ?? PolynomialRoots.FindWithInfinite(characteristic)).InfiniteCount > 0;
+        bool stable = !lostToInfinity && (model.Plane.IsSampled
+            ? LoopStability.IsStableInZ(characteristic)
+            : LoopStability.IsStableInS(characteristic));
+        return new(model.Plane, ResponseMethod.None, null, stable, null, null, null, why, null);
+    }
 }

@@ -42,7 +42,20 @@ internal sealed class CliApp(CliContext unguarded, Func<WorkbenchRequest, int> r
             context.Error.WriteLine($"termlocus: error: {e.Message}");
             return ExitCodes.BadInput;
         }
+        catch (Exception e) when (parsed.CommandResult.Command is not RootCommand && IsRefusedInput(e))
+        {
+            // The verbs check what they can up front (spans, --set values); this is the last guard, so input that
+            // Core still refuses (a value that overflows the loop's coefficients, say) ends in one line, not a trace.
+            context.Error.WriteLine($"termlocus: error: cannot compute this input: {OneLine(e.Message)}");
+            return ExitCodes.BadInput;
+        }
     }
+
+    // The exceptions Core documents for input it cannot handle; anything else is a bug and keeps its stack trace.
+    private static bool IsRefusedInput(Exception e) =>
+        e is ArgumentException or ArithmeticException or InvalidOperationException;
+
+    private static string OneLine(string text) => string.Join(' ', text.Split(['\r', '\n'], StringSplitOptions.RemoveEmptyEntries));
 
     private RootCommand BuildRoot()
     {

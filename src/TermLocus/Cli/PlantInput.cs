@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using TermLocus.App.Text;
 using TermLocus.Core.Plants;
 
 namespace TermLocus.Cli;
@@ -13,7 +14,9 @@ internal sealed record PlantInput(string File, Plant Plant, LoopModel Model, Imm
 {
     /// <summary>
     /// Reads and builds <paramref name="file"/>. Throws <see cref="PlantFileException"/> for a bad file and
-    /// <see cref="UsageException"/> for an override naming no parameter.
+    /// <see cref="UsageException"/> for an override naming no parameter, or putting a toleranced parameter outside
+    /// its band (the file reader refuses such a value too, and the band check would judge a box the value is not in).
+    /// A value outside a parameter's <c>range</c> is allowed: the range is only the span the locus is drawn over.
     /// </summary>
     public static PlantInput Load(string file, IReadOnlyDictionary<string, double> overrides)
     {
@@ -31,9 +34,14 @@ internal sealed record PlantInput(string File, Plant Plant, LoopModel Model, Imm
         var plant = document.Plant;
         foreach (var name in overrides.Keys)
         {
-            if (plant.FindParameter(name) is null)
+            var parameter = plant.FindParameter(name)
+                ?? throw new UsageException($"--set {name}: {file} has no parameter '{name}'");
+            double value = overrides[name];
+            if (parameter.Band is { } band && !band.Contains(value))
             {
-                throw new UsageException($"--set {name}: {file} has no parameter '{name}'");
+                throw new UsageException(
+                    $"--set {name}={NumberText.Exact(value)}: outside the band [{NumberText.Exact(band.Low)}, {NumberText.Exact(band.High)}] "
+                    + $"of '{name}' in {file}; a toleranced value must lie in its band");
             }
         }
 

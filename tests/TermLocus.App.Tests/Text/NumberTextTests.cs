@@ -26,6 +26,8 @@ public class NumberTextTests
     [InlineData(5.2, "5.2")]
     [InlineData(20.0, "20")]
     [InlineData(-0.0, "0")]
+    [InlineData(1.00954e-9, "1.00954e-09")] // lower-case exponent, as Significant spells it
+    [InlineData(2.5e20, "2.5e+20")]
     public void Exact_reads_back_as_the_same_double(double value, string expected) =>
         Assert.Equal(expected, NumberText.Exact(value));
 
@@ -33,6 +35,7 @@ public class NumberTextTests
     [InlineData(12.000000001, "12")]
     [InlineData(2.41421356237, "2.414214")]
     [InlineData(0.000123456789, "0.0001234568")]
+    [InlineData(1.0095412345e-9, "1.009541e-09")]
     public void Short_rounds_away_solver_noise(double value, string expected) =>
         Assert.Equal(expected, NumberText.Short(value));
 

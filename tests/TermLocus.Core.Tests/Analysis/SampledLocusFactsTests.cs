@@ -115,6 +115,22 @@ public class SampledLocusFactsTests
         Assert.Equal(Math.Acos(-(Math.Exp(0.5) - E1) / 2.0), crossing.AngleRadians, 1e-6);
     }
 
+    [Theory]
+    [InlineData("K/(s*(s+1))", 1.0, 2.0)]
+    [InlineData("K/(s*(s+1))", 0.5, 3.0)]
+    [InlineData("K/(s*(s+1)*(s+20))", 0.001, 100.0)]
+    public void An_integrators_root_on_the_circle_at_the_span_start_starts_the_stable_range_there(string plant, double t, double to)
+    {
+        // At K = 0 the held integrator leaves its root on the unit circle at z = 1 (1/s sampled: z/(z − 1), common
+        // practice); any small K > 0 pulls it inside (the motor loop's P(1) = K·c₀ &gt; 0, Ogata, Discrete-Time Control
+        // Systems, 2nd ed., ch. 4, from memory). So the stable range starts at the span start itself, not at a tiny
+        // value where the root's move falls below rounding; each span ends below that loop's critical gain.
+        var model = Sampled([("K", 1.0)], plant, t);
+        var stable = Assert.Single(Study(model, to).Facts.StableIntervals);
+        Assert.Equal(0.0, stable.From, 0.0);
+        Assert.Equal(to, stable.To, 0.0);
+    }
+
     private static LocusStudy Study(LoopModel model, double to) =>
         LocusStudy.Run(model.Family("K", Values()), model.Plane, new Interval(0.0, to), Specs.None);
 }

@@ -101,4 +101,46 @@ public class SpecBoundariesTests
         Assert.Throws<ArgumentOutOfRangeException>(() => SpecBoundaries.Find(SecondOrder, 0, 1, maxNaturalFrequency: -1));
         Assert.Throws<ArgumentOutOfRangeException>(() => SpecBoundaries.Find(SecondOrder, 0, 1, minDecayRate: double.NaN));
     }
+
+    [Fact]
+    public void A_real_pole_through_the_origin_is_no_damping_boundary_but_still_a_decay_rate_one()
+    {
+        // K/((s − 1)(s + 3)): s² + 2s + (K − 3), poles −1 ± √(4 − K) (common practice). A real pole passes through
+        // the origin at K = 3 (the stability crossing, where ζ is undefined); above K = 4 the pair −1 ± j√(K − 4) has
+        // ωn² = K − 3 and ζωn = 1, so ζ = 1/√(K − 3) = 0.5 at K = 7 (Ogata, 5th ed., Section 5-3, from memory).
+        var family = Loops.Descending([1], [1, 2, -3]);
+
+        var damping = Assert.Single(SpecBoundaries.Find(family, 0, 10, minDamping: 0.5));
+        Near(7.0, damping.Value);
+
+        var decay = Assert.Single(SpecBoundaries.Find(family, 0, 10, minDecayRate: 0.0));
+        Near(3.0, decay.Value);
+        Assert.True(decay.PoleMeetsLimitAfter);
+    }
+
+    [Fact]
+    public void A_pole_leaving_the_origin_at_the_span_start_is_no_damping_boundary()
+    {
+        // The conveyor demo's PI loop at its nominal values: K·1.2(s + 8) / (s(0.42 s + 0.08)(0.004 s + 1)); at K = 0
+        // a pole sits at the origin (ζ undefined there). The ζ = 0.5 crossings that remain are those of the complex
+        // pair, which MathNet's roots of the characteristic polynomial confirm: ζ of the least damped pair is 0.5.
+        var family = Loops.Descending([1.2, 9.6], [0.00168, 0.42032, 0.08, 0]);
+
+        var found = SpecBoundaries.Find(family, 0, 150, minDamping: 0.5);
+
+        Assert.NotEmpty(found);
+        Assert.All(found, b => Assert.True(b.Value > 1e-6, $"boundary at K = {b.Value}"));
+        foreach (var b in found)
+        {
+            double zeta = LeastDamping(family.At(b.Value));
+            Assert.Equal(0.5, zeta, 1e-6);
+        }
+    }
+
+    // ζ of the least damped complex root, from MathNet's polynomial roots (companion-matrix eigenvalues).
+    private static double LeastDamping(TermLocus.Core.Algebra.Polynomial p)
+    {
+        var roots = new MathNet.Numerics.Polynomial(p.Coefficients.ToArray()).Roots();
+        return roots.Where(r => Math.Abs(r.Imaginary) > 1e-9).Min(r => -r.Real / r.Magnitude);
+    }
 }

@@ -144,6 +144,19 @@ public class LoopResponseTests
         Assert.Contains("characteristic", response.Failure, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("s^2 + s + K", 1.0, true)] // roots (−1 ± j√3)/2
+    [InlineData("s^2 - s + K", 1.0, false)] // roots (1 ± j√3)/2: Routh–Hurwitz, a negative coefficient (common practice)
+    [InlineData("s^3 + s^2 + s + K", 0.5, true)] // Routh–Hurwitz for s³ + a₂s² + a₁s + a₀: stable iff a₂a₁ &gt; a₀ (Ogata, 5th ed., §5-6, from memory)
+    [InlineData("s^3 + s^2 + s + K", 2.0, false)]
+    public void Without_a_response_stability_still_comes_from_the_characteristic_roots(string characteristic, double k, bool stable)
+    {
+        var model = LoopModelTestPlants.Model([("K", k)], plant: null, characteristic: characteristic);
+        var response = LoopResponse.Analyse(model, Values());
+        Assert.False(response.IsAvailable);
+        Assert.Equal(stable, response.IsStable);
+    }
+
     [Fact]
     public void An_improper_reference_path_has_no_response()
     {

@@ -13,7 +13,11 @@ namespace TermLocus.Cli.Json;
 internal static class ResponseJson
 {
     /// <summary>Writes the whole document; every figure is null when the loop is unstable or has no steady state.</summary>
-    public static void Write(Utf8JsonWriter w, PlantInput input, LoopResponse response)
+    /// <param name="w">The writer.</param>
+    /// <param name="input">The plant and its values.</param>
+    /// <param name="response">The step response at those values.</param>
+    /// <param name="missed">Spec keys missed at these values (<c>stable</c> for stability), written as <c>specs_met</c> and <c>missed</c>.</param>
+    public static void Write(Utf8JsonWriter w, PlantInput input, LoopResponse response, IReadOnlyList<string> missed)
     {
         w.WriteStartObject();
         w.WriteString("schema", "termlocus.response/1");
@@ -22,6 +26,14 @@ internal static class ResponseJson
         w.WriteString("plane", response.Plane.IsSampled ? "z" : "s");
         w.WriteString("method", MethodName(response.Method));
         w.WriteBoolean("stable", response.IsStable);
+        w.WriteBoolean("specs_met", missed.Count == 0);
+        w.WriteStartArray("missed");
+        foreach (var key in missed)
+        {
+            w.WriteStringValue(key);
+        }
+
+        w.WriteEndArray();
         JsonOutput.Number(w, "steady_state", response.SteadyState);
         Figures(w, response.Figures);
         Estimates(w, response);

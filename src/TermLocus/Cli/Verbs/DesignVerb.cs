@@ -2,7 +2,6 @@ using System.CommandLine;
 using TermLocus.App.Reports;
 using TermLocus.Cli.Json;
 using TermLocus.Core.Analysis;
-using TermLocus.Core.Plants;
 
 namespace TermLocus.Cli.Verbs;
 
@@ -28,7 +27,7 @@ internal sealed class DesignVerb : IVerb
         command.SetAction(result =>
         {
             var input = PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
-            var design = RobustDesign.Find(input.Model, input.Values, Span(input, result.GetValue(from), result.GetValue(to)));
+            var design = RobustDesign.Find(input.Model, input.Values, LocusInput.Span(input, result.GetValue(from), result.GetValue(to)));
             if (result.GetValue(json))
             {
                 context.Out.Write(JsonOutput.Write(w => DesignJson.Write(w, input, design)));
@@ -44,18 +43,5 @@ internal sealed class DesignVerb : IVerb
             return design.Recommended is { Confirmed: true } ? ExitCodes.Ok : ExitCodes.SpecViolated;
         });
         return command;
-    }
-
-    private static Interval Span(PlantInput input, double? from, double? to)
-    {
-        string sweep = input.Plant.Loop.Sweep;
-        var span = SweepSpan.For(input.Plant, input.Model.Family(sweep, input.Values), input.Values[sweep]);
-        double low = from ?? span.Low, high = to ?? span.High;
-        if (!(low < high) || !double.IsFinite(low) || !double.IsFinite(high))
-        {
-            throw new UsageException($"the span from {low} to {high} is empty or reversed");
-        }
-
-        return new Interval(low, high);
     }
 }

@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.CommandLine;
 using TermLocus.App.Canvas;
 using TermLocus.App.Plot;
@@ -30,26 +31,55 @@ internal sealed class ResponseVerb : IVerb
         {
             var input = PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
             var response = LoopResponse.Analyse(input.Model, input.Values);
+            if (!response.IsAvailable)
+            {
+                // This plant cannot give a step response (only its characteristic polynomial, an improper closed
+                // loop): input the verb cannot handle, so one located line on stderr and nothing on stdout.
+                throw new PlantFileException(new PlantFileError(input.File, WhereTheLoopIsWritten(input.Plant.Loop),
+                    "no step response: " + response.Failure));
+            }
+
+            var missed = Missed(input, response);
             if (result.GetValue(json))
             {
-                context.Out.Write(JsonOutput.Write(w => ResponseJson.Write(w, input, response)));
+                context.Out.Write(JsonOutput.Write(w => ResponseJson.Write(w, input, response, missed)));
             }
             else
             {
-                WriteText(context, input, response, SymbolChoice.Detect(context.Environment, result.GetValue(symbols)));
+                var chosen = SymbolChoice.Detect(context.Environment, result.GetValue(symbols));
+                WriteText(context, input, response, chosen);
+                var g = chosen == CanvasSymbols.Braille ? Glyphs.Unicode : Glyphs.Ascii;
+                context.Out.WriteLine(missed.IsEmpty
+                    ? $"  specs at these values: every one met {g.Met}"
+                    : $"  specs at these values: {g.Violated} missed {string.Join(", ", missed)}");
             }
 
-            if (!response.IsAvailable)
-            {
-                return ExitCodes.BadInput;
-            }
-
-            double? limit = input.Plant.Specs.MaxOvershootPct;
-            bool overshootMet = limit is not double l || response.Figures?.OvershootPct is double o && o <= l;
-            return response.IsStable && overshootMet ? ExitCodes.Ok : ExitCodes.SpecViolated;
+            return missed.IsEmpty ? ExitCodes.Ok : ExitCodes.SpecViolated;
         });
         return command;
     }
+
+    // The specs judged at these values (the band is what `check` judges): strict stability, every pole limit at the
+    // closed-loop poles here, and max_overshoot_pct on the simulated response. Spec keys, "stable" for stability.
+    private static ImmutableArray<string> Missed(PlantInput input, LoopResponse response)
+    {
+        var missed = ImmutableArray.CreateBuilder<string>();
+        if (!response.IsStable)
+        {
+            missed.Add("stable");
+        }
+
+        missed.AddRange(LoopCheck.Run(input.Model, input.Values).Nominal.Violations.Select(v => v.Key).Distinct());
+        if (input.Plant.Specs.MaxOvershootPct is double limit && !(response.Figures?.OvershootPct is double o && o <= limit))
+        {
+            missed.Add(SpecKind.MaxOvershootPct.Key());
+        }
+
+        return missed.ToImmutable();
+    }
+
+    private static SourcePosition WhereTheLoopIsWritten(LoopDefinition loop) =>
+        (loop.Characteristic ?? loop.Plant)?.PositionOf(0) ?? new SourcePosition(1, 1);
 
     // What the plotted curve is: for a sampled loop the plant output between samples (instants marked when they lie
     // far enough apart), or the output at the instants alone.
