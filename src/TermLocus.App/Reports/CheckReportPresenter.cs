@@ -50,6 +50,12 @@ public static class CheckReportPresenter
             lines.Add($"  note: the pole at {SpecWording.Location(hidden, glyphs)} is cancelled in the loop but is still a closed-loop pole");
         }
 
+        if (result.PolesIllConditioned)
+        {
+            lines.Add($"  note: these poles are ill-conditioned (a repeated or tightly clustered root): rounding alone can move");
+            lines.Add($"  them by {NumberText.Significant(100 * result.PoleSpread!.Value)} % of their size, so their digits and the verdict may be wrong");
+        }
+
         AddSpecTable(lines, result, glyphs);
         lines.Add("  " + Verdict(result, glyphs));
         return lines.ToImmutable();

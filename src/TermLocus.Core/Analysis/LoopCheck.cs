@@ -49,7 +49,19 @@ public static class LoopCheck
             worstDamping, worstDecay, stable)
         {
             NominalOvershoot = nominalOvershoot,
+            PoleSpread = PoleSpread(model, full),
         };
+    }
+
+    // Two more root solves of the nominal polynomial: cheap beside the band search, and the only way a user learns
+    // that the digits of (s+1)^40's poles are noise.
+    private static double? PoleSpread(LoopModel model, IReadOnlyDictionary<string, double> values)
+    {
+        var characteristic = model.Characteristic(values);
+        var roots = model.CharacteristicRoots(values);
+        return roots.InfiniteCount > 0 || characteristic.Degree != roots.Finite.Length
+            ? null
+            : RootUncertainty.RelativeSpread(characteristic, roots.Finite);
     }
 
     /// <summary>

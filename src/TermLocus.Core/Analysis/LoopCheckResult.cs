@@ -36,6 +36,17 @@ public sealed record LoopCheckResult(
     /// </summary>
     public BandOutcome? NominalOvershoot { get; init; }
 
+    /// <summary>
+    /// How far rounding alone can move the poles at <see cref="Values"/>, relative to their magnitude (see
+    /// <see cref="Algebra.RootUncertainty.RelativeSpread"/>): near 1e-15 for well-separated poles, large for high-order
+    /// repeated or tightly clustered ones, whose digits then mean little; null when poles were lost to infinity or the
+    /// characteristic polynomial is given with its roots.
+    /// </summary>
+    public double? PoleSpread { get; init; }
+
+    /// <summary>True when <see cref="PoleSpread"/> is above <see cref="Algebra.RootUncertainty.WorthWarning"/>.</summary>
+    public bool PolesIllConditioned => PoleSpread > Algebra.RootUncertainty.WorthWarning;
+
     /// <summary>True when every limit holds across the box and the loop is stable everywhere in it.</summary>
     public bool Passed => StableAcrossBand && Band.All(b => b.Met);
 

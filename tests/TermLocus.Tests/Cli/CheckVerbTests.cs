@@ -105,4 +105,42 @@ public class CheckVerbTests
         Assert.Equal(2, CliRunner.Run("check", "/nonexistent/plant.toml").Code);
         Assert.Equal(2, CliRunner.Run("check", RepoFiles.Plant("conveyor-speed.toml"), "--set", "Nope=1").Code);
     }
+
+    [Fact]
+    public void Poles_of_a_high_order_repeated_root_are_flagged_as_untrustworthy()
+    {
+        // K/(s+1)^30 at a tiny K: the closed-loop poles are -1 + (K)^(1/30)·e^{jθ}, a tight ring around -1. In double
+        // precision a 30-fold cluster can only be resolved to about (1e-16)^(1/30) ≈ 0.3 (perturbation theory of
+        // multiple roots, e.g. Wilkinson, Rounding Errors in Algebraic Processes, 1963, from memory).
+        string file = RepoFiles.TempPlant("""
+            title = "thirty lags in a row"
+            [parameters]
+            K = { value = 1e-40, range = [0.0, 1.0] }
+            [loop]
+            plant = "K / (s + 1)^30"
+            sweep = "K"
+            """);
+        var (_, text, _) = CliRunner.Run("check", file);
+        Assert.Contains("note: these poles are ill-conditioned", text, StringComparison.Ordinal);
+
+        var (_, json, _) = CliRunner.Run("check", file, "--json");
+        using var doc = JsonDocument.Parse(json);
+        var plant = doc.RootElement.GetProperty("plants")[0];
+        Assert.True(plant.GetProperty("poles_ill_conditioned").GetBoolean());
+        Assert.True(plant.GetProperty("pole_spread").GetDouble() > 1e-3);
+    }
+
+    [Fact]
+    public void Poles_of_a_well_separated_loop_carry_no_such_note()
+    {
+        string file = RepoFiles.TempPlant(ThirdOrderLoop);
+        var (_, text, _) = CliRunner.Run("check", file);
+        Assert.DoesNotContain("ill-conditioned", text, StringComparison.Ordinal);
+
+        var (_, json, _) = CliRunner.Run("check", file, "--json");
+        using var doc = JsonDocument.Parse(json);
+        var plant = doc.RootElement.GetProperty("plants")[0];
+        Assert.False(plant.GetProperty("poles_ill_conditioned").GetBoolean());
+        Assert.True(plant.GetProperty("pole_spread").GetDouble() < 1e-9);
+    }
 }

@@ -31,6 +31,9 @@ internal static class CheckJson
         }
 
         w.WriteEndArray();
+        // Additive within termlocus.check/1: relative movement rounding alone can cause (null when unknown).
+        JsonOutput.Number(w, "pole_spread", result.PoleSpread);
+        w.WriteBoolean("poles_ill_conditioned", result.PolesIllConditioned);
         WriteWorst(w, result);
         WriteViolations(w, result);
         WriteSpecs(w, result);
