@@ -137,7 +137,7 @@ public static class DesignReportPresenter
     private static void AddRecommendation(ImmutableArray<string>.Builder lines, DesignResult result, DesignRecommendation r,
         string p, string unit, Glyphs g)
     {
-        lines.Add($"  recommended: {p} = {NumberText.Short(r.Value, 6)}{unit} (largest smallest margin in the widest interval)");
+        lines.Add($"  recommended: {p} = {NumberText.Exact(r.Value)}{unit} (largest smallest margin in the widest interval)");
         var m = r.SmallestMargin;
         string where = Where(result.Box, m.At) + (m.AtCorner ? string.Empty : " (inside the band)");
         string figure = m.Spec == DesignMargin.StabilityKey
@@ -149,7 +149,7 @@ public static class DesignReportPresenter
             lines.Add(SafeText.Fit($"    largest overshoot across the band: {NumberText.Significant(pct)} % (limit {NumberText.Exact(o.Limit)} %) at {Where(result.Box, o.At)}",
                 CheckReportPresenter.Width));
         }
-        string check = $"    band check at {p} = {NumberText.Short(r.Value, 6)} (corners and interior search): ";
+        string check = $"    band check at {p} = {NumberText.Exact(r.Value)} (corners and interior search): ";
         lines.Add(SafeText.Fit(r.Confirmed ? check + $"pass {g.Met}" : check + $"FAIL {g.Violated} " + Misses(result.Box, r.Check),
             CheckReportPresenter.Width));
     }

@@ -74,9 +74,57 @@ public static class NumberText
         return Exact(double.Parse(rounded, NumberStyles.Float, CultureInfo.InvariantCulture));
     }
 
+    /// <summary>
+    /// <paramref name="value"/> as <see cref="Significant"/> spells it, with digits added (up to the value itself) until
+    /// the text reads on the same side of <paramref name="limit"/> as the value does, so a figure never prints equal to
+    /// (or on the wrong side of) the limit it is compared with: "0.1200" against 0.12 becomes "0.1200003".
+    /// </summary>
+    public static string Against(double value, double limit, int digits = 4)
+    {
+        string text = Significant(value, digits);
+        if (!double.IsFinite(value) || !double.IsFinite(limit) || value == limit)
+        {
+            return text;
+        }
+
+        for (int more = digits + 1; Math.Sign(Read(text) - limit) != Math.Sign(value - limit) && more <= 17; more++)
+        {
+            text = Short(value, more);
+        }
+
+        return text;
+    }
+
+    /// <summary>
+    /// The swept value to stand on near a computed one (a spec boundary, a crossing, a point picked on the plane): the
+    /// shortest number at <paramref name="digits"/> significant digits, with more while that is further than a tenth of
+    /// <paramref name="step"/> from <paramref name="value"/>, so the value shown is the value used and saved, and it
+    /// stays apart from the neighbouring steps. Non-finite values come back unchanged.
+    /// </summary>
+    public static double Tidy(double value, double step, int digits = 7)
+    {
+        if (!double.IsFinite(value) || value == 0.0)
+        {
+            return value;
+        }
+
+        for (int d = digits; d < 17; d++)
+        {
+            double rounded = Read(Short(value, d));
+            if (Math.Abs(rounded - value) <= Math.Abs(step) / 10.0)
+            {
+                return rounded;
+            }
+        }
+
+        return value;
+    }
+
     /// <summary>Parses a number typed by a user (invariant culture, exponent allowed); false for anything else.</summary>
     public static bool TryParse(string text, out double value) =>
         double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out value) && double.IsFinite(value);
+
+    private static double Read(string text) => double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
 
     private static string StripNegativeZero(string text)
     {

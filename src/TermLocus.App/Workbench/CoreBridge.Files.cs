@@ -65,7 +65,8 @@ internal static partial class CoreBridge
     public static string WriteRecovery(LoadedPlant loaded, double value, string? verdict, SaveContext context)
     {
         var document = loaded.Document ?? throw new IOException("this plant was not read from a file");
-        var bytes = SavedBytes(loaded, value, verdict, context, null, null);
+        string name = SaveRecoveryEffect.RecordName(loaded.Plant.Loop.Sweep, value);
+        var bytes = SavedBytes(loaded, value, verdict, context, name, SaveRecoveryEffect.RecordNote);
         string target = SaveRecoveryEffect.RecoveryPathFor(document.Path);
         var result = AtomicFileSaver.TryWriteFile(target, bytes, overwrite: true, permissionsOf: document.Path);
         return result.Succeeded ? target : throw new IOException(result.Message);

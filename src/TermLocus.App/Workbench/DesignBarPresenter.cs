@@ -34,7 +34,7 @@ public static class DesignBarPresenter
     private static string Bar(Core.Analysis.DesignResult result, double value, string name, int width, Glyphs g)
     {
         string suffix = result.Recommended is { } r && result.Widest is { } w
-            ? $" {NumberText.Short(w.From, 4)}..{NumberText.Short(w.To, 4)} d {NumberText.Short(r.Value, 4)}"
+            ? $" {NumberText.Short(w.From, 4)}..{NumberText.Short(w.To, 4)} d {NumberText.Exact(r.Value)}"
             : " none";
 
         // "feasible" goes first when room is short: the bar's cells say more.
@@ -50,16 +50,35 @@ public static class DesignBarPresenter
             return prefix.TrimEnd() + suffix;
         }
 
-        var bar = DesignBar.Line(result.Span, result.Intervals, result.Recommended?.Value, cells).ToCharArray();
-        string line = prefix + new string(bar) + suffix;
-        if (result.Span.Contains(value))
-        {
-            // The value on screen, in the bar's own cell: 1 + the slice of the span it falls in.
-            int cell = Math.Clamp((int)((value - result.Span.Low) / result.Span.Width * cells), 0, cells - 1);
-            int at = prefix.Length + 1 + cell;
-            line = line[..at] + g.BarMarker + line[(at + 1)..];
-        }
-
-        return line;
+        var bar = DesignBar.Line(result.Span, result.Intervals, result.Recommended?.Value, cells)[1..^1].ToCharArray();
+        int? valueCell = result.Span.Contains(value) ? CellOf(result.Span, value, cells) : null;
+        KeepIntervalsVisible(bar, result, valueCell);
+        var cellText = bar.Select((c, i) => i == valueCell ? g.BarMarker : c.ToString());
+        return prefix + "[" + string.Concat(cellText) + "]" + suffix;
     }
+
+    // The markers (recommended value, value on screen) may cover the only cell of a narrow interval: every interval
+    // keeps one '=' of its own, in its cells if one is free, else in the free cell beside them.
+    private static void KeepIntervalsVisible(char[] bar, Core.Analysis.DesignResult result, int? valueCell)
+    {
+        bool Free(int c) => c >= 0 && c < bar.Length && c != valueCell && bar[c] != DesignBar.Marker;
+        foreach (var interval in result.Intervals)
+        {
+            int low = CellOf(result.Span, interval.From, bar.Length), high = CellOf(result.Span, interval.To, bar.Length);
+            if (Enumerable.Range(low, high - low + 1).Any(c => bar[c] == DesignBar.Feasible && c != valueCell))
+            {
+                continue;
+            }
+
+            int? spare = Enumerable.Range(low, high - low + 1).Concat([high + 1, low - 1, high + 2, low - 2])
+                .Where(Free).Select(c => (int?)c).FirstOrDefault();
+            if (spare is int c)
+            {
+                bar[c] = DesignBar.Feasible;
+            }
+        }
+    }
+
+    private static int CellOf(Core.Plants.Interval span, double value, int cells) =>
+        Math.Clamp((int)Math.Floor((value - span.Low) / span.Width * cells), 0, cells - 1);
 }

@@ -34,7 +34,7 @@ public static class HelpPresenter
     {
         width = Math.Max(width, MinimumWidth);
         var lines = ImmutableArray.CreateBuilder<string>();
-        lines.Add("Keys (plain keys only; Shift, Ctrl and Alt are never needed with an arrow)");
+        lines.AddRange(Wrap(KeysHeading(), width));
         foreach (var scope in ScopeOrder.Where(s => KeyMap.Bindings.Any(b => b.Scope == s)))
         {
             lines.Add(string.Empty);
@@ -50,6 +50,20 @@ public static class HelpPresenter
         lines.Add(string.Empty);
         lines.AddRange(Wrap(Caution, width));
         return lines.Select(l => TextWidth.Of(l) > width ? TextWidth.Cut(l, width) : l).ToImmutableArray();
+    }
+
+    /// <summary>
+    /// The first help line, read off the key table: which keys are capitals typed with Shift, which take Ctrl, and that
+    /// nothing needs Alt or a modifier with an arrow.
+    /// </summary>
+    public static string KeysHeading()
+    {
+        var chords = KeyMap.Bindings.Select(b => b.Key).Where(k => k.Special == SpecialKey.None).Distinct().ToList();
+        var capitals = chords.Where(k => !k.Ctrl && char.IsUpper(k.Character)).Select(k => k.Character.ToString()).Distinct().Order(StringComparer.Ordinal);
+        var ctrl = chords.Where(k => k.Ctrl).Select(k => "Ctrl+" + char.ToUpperInvariant(k.Character)).Distinct();
+        string shift = capitals.Any() ? $"capital letters ({string.Join(" ", capitals)}) are typed with Shift" : "no key needs Shift";
+        string control = ctrl.Any() ? $"Ctrl is only for {string.Join(" and ", ctrl)}" : "no key needs Ctrl";
+        return $"Keys: {shift}; {control}; no key needs Alt, and arrows need no modifier";
     }
 
     /// <summary>A heading for each scope.</summary>
@@ -69,24 +83,48 @@ public static class HelpPresenter
         Scope.Everywhere => "Everywhere",
     };
 
-    /// <summary>Words of <paramref name="text"/> wrapped to lines of at most <paramref name="width"/> columns.</summary>
+    /// <summary>
+    /// Words of <paramref name="text"/> wrapped to lines of at most <paramref name="width"/> columns. A phrase in
+    /// parentheses ("(with zh -25 %)") and a "%" after its number stay on one line when they fit on one.
+    /// </summary>
     public static IEnumerable<string> Wrap(string text, int width)
     {
         var line = new System.Text.StringBuilder();
-        foreach (var word in text.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+        foreach (var unit in Units(text, width))
         {
-            if (line.Length > 0 && line.Length + 1 + word.Length > width)
+            if (line.Length > 0 && line.Length + 1 + unit.Length > width)
             {
                 yield return line.ToString();
                 line.Clear();
             }
 
-            line.Append(line.Length > 0 ? " " : string.Empty).Append(word);
+            line.Append(line.Length > 0 ? " " : string.Empty).Append(unit);
         }
 
         if (line.Length > 0)
         {
             yield return line.ToString();
         }
+    }
+
+    // Words, with a parenthesised phrase and a unit "%" joined to what they belong to; a joined unit too wide for
+    // a line falls back to its words.
+    private static IEnumerable<string> Units(string text, int width)
+    {
+        var units = new List<string>();
+        int open = 0;
+        foreach (var word in text.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+        {
+            bool joins = units.Count > 0 && (open > 0 || word == "%" || word.StartsWith("%)", StringComparison.Ordinal));
+            units.Add(joins ? units[^1] + " " + word : word);
+            if (joins)
+            {
+                units.RemoveAt(units.Count - 2);
+            }
+
+            open = Math.Max(0, open + word.Count(c => c == '(') - word.Count(c => c == ')'));
+        }
+
+        return units.SelectMany(u => u.Length > width ? u.Split(' ') : [u]);
     }
 }

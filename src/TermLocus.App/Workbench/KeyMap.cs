@@ -97,8 +97,8 @@ public static class KeyMap
         Bind(Command.JumpToRangeEnd, "go to the end of the range", S(SpecialKey.End), K('G'));
         Bind(Command.EnterValue, "type an exact value", K('='), S(SpecialKey.Enter));
         Bind(Command.JumpToRecommended, "go to the recommended value (widest feasible interval)", K('d'));
-        Bind(Command.JumpToPreviousBoundary, "previous spec boundary or crossing", K('p'), S(SpecialKey.PageUp));
-        Bind(Command.JumpToNextBoundary, "next spec boundary or crossing", K('n'), S(SpecialKey.PageDown));
+        Bind(Command.JumpToPreviousBoundary, "previous spec boundary, crossing or band limit", K('p'), S(SpecialKey.PageUp));
+        Bind(Command.JumpToNextBoundary, "next spec boundary, crossing or band limit", K('n'), S(SpecialKey.PageDown));
         Bind(Command.ZoomIn, "zoom in", K('z'));
         Bind(Command.ZoomOut, "zoom out", K('Z'));
         Bind(Command.FitView, "fit the view to the locus", K('f'));

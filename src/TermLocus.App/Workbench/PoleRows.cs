@@ -10,6 +10,13 @@ public static class PoleRows
     /// <summary>An imaginary part below this fraction of the pole's magnitude counts as zero (root-finder dust).</summary>
     public const double RealTolerance = 1e-7;
 
+    /// <summary>
+    /// True when <paramref name="root"/> lies on the stability boundary of <paramref name="plane"/>: real part exactly 0
+    /// (the origin included), or magnitude exactly 1 in a sampled loop. Exact, as <see cref="LoopPlane.IsStable"/> is.
+    /// </summary>
+    public static bool OnBoundary(Complex root, LoopPlane plane) =>
+        plane.IsSampled ? Complex.Abs(root) == 1.0 : root.Real == 0.0;
+
     /// <summary>The rows for s-plane <paramref name="poles"/>, sorted by real part, largest (least stable) first.</summary>
     public static ImmutableArray<PoleRow> Group(ImmutableArray<Complex> poles) => Group(poles, LoopPlane.Continuous);
 
@@ -36,7 +43,7 @@ public static class PoleRows
             }
 
             var s = plane.ToEquivalentS(shown);
-            var row = new PoleRow(shown, shown.Imaginary != 0, plane.MetricsOf(shown), plane.IsStable(shown));
+            var row = new PoleRow(shown, shown.Imaginary != 0, plane.MetricsOf(shown), plane.IsStable(shown), OnBoundary(shown, plane));
             rows.Add((row, double.IsFinite(s.Real) ? s.Real : double.NegativeInfinity));
         }
 

@@ -155,7 +155,8 @@ public static class PoleTablePresenter
         var words = new List<string>();
         if (!row.IsStable)
         {
-            words.Add("unstable");
+            // A pole on the boundary neither decays nor grows: marginal, not unstable (the status line says more).
+            words.Add(row.OnBoundary ? "marginal" : "unstable");
         }
 
         foreach (var miss in poles.MissesOf(row.Pole))

@@ -83,7 +83,11 @@ public static class ResponsePanePresenter
         double? limit = session.Loaded.Plant.Specs.MaxOvershootPct;
         bool beside = width - FiguresWidth >= MinimumSidePlotWidth;
         int plotColumns = beside ? width - FiguresWidth : width;
-        var figures = beside ? FullFigures(response, limit, g, plotColumns, symbols) : CompactFigures(response, limit, g).ToList();
+        // Beside the plot, a figure line too long for its column (the estimates' poles) is wrapped, not cut.
+        var figures = beside
+            ? FullFigures(response, limit, g, plotColumns, symbols)
+                .SelectMany(l => TextWidth.Of(l) > FiguresWidth - 2 ? HelpPresenter.Wrap(l, FiguresWidth - 2) : [l]).ToList()
+            : CompactFigures(response, limit, g).ToList();
         int plotRows = beside ? height : height - figures.Count;
         var plot = plotRows >= MinimumPlotRows && plotColumns >= MinimumPlotColumns
             ? Plot(response, plotColumns, plotRows, symbols)
@@ -116,7 +120,7 @@ public static class ResponsePanePresenter
         var lines = ResponseReportPresenter.Lines(response, g).ToList();
         if (limit is double l && response.Figures?.OvershootPct is double pct && pct > l)
         {
-            lines.Add($"{g.Violated} overshoot {NumberText.Significant(pct)} % is over the limit of {NumberText.Exact(l)} %");
+            lines.Add($"{g.Violated} overshoot {NumberText.Against(pct, l)} % is over the limit of {NumberText.Exact(l)} %");
         }
 
         if (response.Method == ResponseMethod.Sampled)

@@ -10,6 +10,16 @@ namespace TermLocus.App.Workbench;
 /// the band checked while writing.</param>
 public sealed record SaveRecoveryEffect(LoadedPlant Loaded, double Value, string? Verdict) : Effect
 {
+    /// <summary>
+    /// The note of the operating-point record in a recovery file: should the file be renamed into place, its record
+    /// still says it is no saved decision.
+    /// </summary>
+    public const string RecordNote = "recovered after the workbench was ended before saving; not a saved decision";
+
+    /// <summary>The name of the record in a recovery file, e.g. "Kp = 28.5926 (recovered, not saved)".</summary>
+    public static string RecordName(string parameter, double value) =>
+        $"{parameter} = {Text.NumberText.Exact(value)} (recovered, not saved)";
+
     /// <summary>The recovery file for <paramref name="plantPath"/>.</summary>
     public static string RecoveryPathFor(string plantPath) => plantPath + ".recovery";
 }

@@ -56,12 +56,8 @@ public static class SpecWording
         }
 
         string relation = IsMinimum(miss.SpecKey) ? "<" : ">";
-        // On a boundary the figure rounds to the limit; show the digits that make "0.3000 < 0.3" honest.
-        string figure = NumberText.Significant(actual);
-        if (figure == NumberText.Significant(miss.Limit))
-        {
-            figure = NumberText.Short(actual, 12);
-        }
+        // On a boundary the figure rounds to the limit; the digits that make "0.3000 < 0.3" honest are added.
+        string figure = NumberText.Against(actual, miss.Limit);
 
         return $"{key}: {Figure(miss.SpecKey, g)} {figure} {relation} {NumberText.Exact(miss.Limit)} at {at}";
     }

@@ -44,7 +44,7 @@ public static class StatusLinePresenter
         var sweep = session.Sweep;
         if (poles.Problem is { } problem)
         {
-            return $"{g.Violated} at {sweep.Name} = {NumberText.Short(sweep.Value)} {SafeText.Visible(problem)}";
+            return $"{g.Violated} at {sweep.Name} = {NumberText.Exact(sweep.Value)} {SafeText.Visible(problem)}";
         }
 
         string here = session.Varied.IsNominal ? string.Empty : $" (with {VariedWords(session.Varied)})";
@@ -57,8 +57,16 @@ public static class StatusLinePresenter
 
         if (!poles.Unstable.IsEmpty)
         {
+            var pole = poles.Unstable[0];
+            string place = SpecWording.Location(pole, g);
+            if (PoleRows.OnBoundary(pole, poles.Plane))
+            {
+                string on = poles.Plane.IsSampled ? "on the unit circle" : "on the imaginary axis";
+                return $"{g.Violated} marginal: a pole at {place} is {on}, the stability boundary{here}";
+            }
+
             string where = poles.Plane.IsSampled ? "is outside the unit circle" : "is in the right half-plane";
-            return $"{g.Violated} unstable: a pole at {SpecWording.Location(poles.Unstable[0], g)} {where}{here}";
+            return $"{g.Violated} unstable: a pole at {place} {where}{here}";
         }
 
         if (BandVerdict(session, g) is { } band)
@@ -66,7 +74,7 @@ public static class StatusLinePresenter
             return band;
         }
 
-        string at = $"at {sweep.Name} = {NumberText.Short(sweep.Value)}";
+        string at = $"at {sweep.Name} = {NumberText.Exact(sweep.Value)}";
         if (session.CheckPending)
         {
             return $"{g.Met} {(HasSpecs(session) ? "all specs met" : "stable")} {at}; checking the band{g.Ellipsis}";

@@ -74,21 +74,51 @@ internal static class Sweeping
             return Update.Say(s, StatusMessage.Warning("the locus is still being traced"));
         }
 
-        double value = session.Sweep.Value;
-        double tolerance = MarkTolerance * Math.Max(session.Sweep.Range.Width, Math.Abs(value));
-        SweepMark? mark = direction > 0
-            ? locus.Marks.Where(m => m.Value > value + tolerance).MinBy(m => m.Value)
-            : locus.Marks.Where(m => m.Value < value - tolerance).MaxBy(m => m.Value);
-        if (mark is null)
+        var sweep = session.Sweep;
+        double value = sweep.Value;
+        double tolerance = MarkTolerance * Math.Max(sweep.Range.Width, Math.Abs(value));
+        // A stop counts as "here" when the value is the stop itself or the tidy number standing for it.
+        bool Beyond(Stop m) => Math.Abs(m.Value - value) > tolerance && NumberText.Tidy(m.Value, sweep.Step) != value;
+        var stops = locus.Marks.Select(m => new Stop(m.Value, at => $"{SpecWording.DescribeMark(m)} {at}"))
+            .Concat(BandLimits(session)).Where(Beyond);
+        Stop? stop = direction > 0
+            ? stops.Where(m => m.Value > value).MinBy(m => m.Value)
+            : stops.Where(m => m.Value < value).MaxBy(m => m.Value);
+        if (stop is null)
         {
             string where = direction > 0 ? "above" : "below";
             return Update.Say(s, StatusMessage.Info(
-                $"no spec boundary or crossing {where} {session.Sweep.Name} = {NumberText.Exact(value)} in the range"));
+                $"no spec boundary, crossing or band limit {where} {sweep.Name} = {NumberText.Exact(value)} in the range"));
         }
 
-        return SetValue(s, mark.Value, StatusMessage.Info(
-            $"{SpecWording.DescribeMark(mark)} at {session.Sweep.Name} = {NumberText.Short(mark.Value)}"));
+        double target = NumberText.Tidy(stop.Value, sweep.Step);
+        return SetValue(s, target, StatusMessage.Info(stop.Describe($"at {sweep.Name} = {NumberText.Exact(target)}")));
     }
+
+    // The ends of the design's feasible intervals inside the range (once the design is worked out): where some point
+    // of the tolerance band starts to miss a spec. An end at the range's own end, limited by no spec, is not one.
+    private static IEnumerable<Stop> BandLimits(PlantSession session)
+    {
+        if (session.Design?.Result is not { } design)
+        {
+            return [];
+        }
+
+        static string Keys(ImmutableArray<string> keys) => SafeText.Visible(string.Join(" and ", keys));
+        var range = session.Sweep.Range;
+        return design.Intervals.SelectMany(i => new[]
+            {
+                i.FromLimitedBy.IsEmpty ? null
+                    : new Stop(i.From, at => $"band limit {at}; below it the band misses {Keys(i.FromLimitedBy)}"),
+                i.ToLimitedBy.IsEmpty ? null
+                    : new Stop(i.To, at => $"band limit {at}; above it the band misses {Keys(i.ToLimitedBy)}"),
+            })
+            .OfType<Stop>()
+            .Where(m => range.Contains(m.Value));
+    }
+
+    // A value p/n stop at, and its words around "at Kp = 12.5".
+    private sealed record Stop(double Value, Func<string, string> Describe);
 
     public static (WorkbenchState, ImmutableArray<Effect>) ToRecommended(WorkbenchState s)
     {
@@ -114,7 +144,8 @@ internal static class Sweeping
 
         var result = session.Design.Result!;
         double best = result.Recommended!.Value;
-        double value = StepSeries.Round(best, sweep.Step / 10);
+        // The design rounds its recommendation to the digits it reports; the same number is shown, checked and saved.
+        double value = best;
         var interval = result.Intervals.FirstOrDefault(i => i.From <= best && best <= i.To) ?? result.Widest!;
         bool lowNearer = best - interval.From <= interval.To - best;
         double end = lowNearer ? interval.From : interval.To;
@@ -133,8 +164,14 @@ internal static class Sweeping
         }
 
         var sweep = session.Sweep;
-        return SetValue(s, sweep.SavedValue, StatusMessage.Info(
-            $"back to the saved value {sweep.Name} = {NumberText.Exact(sweep.SavedValue)}"));
+        string back = $"back to the saved value {sweep.Name} = {NumberText.Exact(sweep.SavedValue)}";
+        if (session.AppliedRecovery is { } recovery)
+        {
+            // Going back is no decision about the recovered value: the file stays until a save or a discard.
+            back += $"; {SafeText.Visible(Path.GetFileName(recovery))} kept for next time";
+        }
+
+        return SetValue(s, sweep.SavedValue, StatusMessage.Info(back));
     }
 
     public static (WorkbenchState, ImmutableArray<Effect>) Pick(WorkbenchState s, double value)

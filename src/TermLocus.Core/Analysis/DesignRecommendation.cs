@@ -2,7 +2,8 @@ namespace TermLocus.Core.Analysis;
 
 /// <summary>The recommended swept value of a design and its confirmation by the full band check.</summary>
 /// <param name="Value">The swept value that maximises the smallest relative margin over the nominal point and the
-/// corners, inside the widest feasible interval.</param>
+/// corners, inside the widest feasible interval, rounded to <see cref="RobustDesign.RecommendedDigits"/> significant
+/// digits (more only where the interval needs them), so its shortest spelling is short.</param>
 /// <param name="SmallestMargin">The smallest margin of the limits the design judged (the pole limits, and
 /// <c>max_overshoot_pct</c> when <see cref="DesignResult.OvershootJudged"/>) found by <see cref="LoopCheck.Run"/> at
 /// <paramref name="Value"/>, which also searches inside the box for the pole limits; it may be below the corner figure

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Globalization;
 using TermLocus.Core.Plants;
 
 namespace TermLocus.Core.Analysis;
@@ -70,6 +71,12 @@ public static class RobustDesign
     /// <summary>Fewest samples of the widest interval the recommended value is sought from, with an overshoot limit.</summary>
     public const int MinRecommendSamples = 9;
 
+    /// <summary>
+    /// Significant digits the recommended value is rounded to before the full band check (more when the interval is
+    /// so narrow that six would leave it), so the value reported, checked, shown and saved is one and the same number.
+    /// </summary>
+    public const int RecommendedDigits = 6;
+
     /// <summary>Intervals no wider than this share of the span's scale are rounding touches of a boundary and dropped.</summary>
     public const double MinWidthShare = 1e-10;
 
@@ -112,6 +119,7 @@ public static class RobustDesign
             double best = criteria.Overshoot is null
                 ? DesignOptimum.Maximize(p => criteria.Objective(p, double.NegativeInfinity), widest.From, widest.To, RecommendSamples, scale)
                 : RecommendWithOvershoot(criteria, criteria.Overshoot, widest, sampled, scale);
+            best = RoundInside(best, widest.From, widest.To);
             var check = LoopCheck.Run(model, full.SetItem(sweep, best));
             recommended = new DesignRecommendation(best, SmallestMargin(check, criteria), check);
         }
@@ -120,6 +128,22 @@ public static class RobustDesign
         {
             OvershootJudged = criteria.Overshoot is not null,
         };
+    }
+
+    // The fewest digits from RecommendedDigits up that keep the value inside [from, to]; 17 digits are the value itself.
+    private static double RoundInside(double value, double from, double to)
+    {
+        for (int digits = RecommendedDigits; digits < 17; digits++)
+        {
+            double rounded = double.Parse(
+                value.ToString("G" + digits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+            if (from <= rounded && rounded <= to)
+            {
+                return rounded;
+            }
+        }
+
+        return value;
     }
 
     /// <summary>The scale relative tolerances refer to: max(span width, |low|, |high|).</summary>

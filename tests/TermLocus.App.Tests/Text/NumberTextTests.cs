@@ -56,4 +56,32 @@ public class NumberTextTests
     [InlineData("1e999")]
     [InlineData("NaN")]
     public void TryParse_refuses_anything_else(string text) => Assert.False(NumberText.TryParse(text, out _));
+
+    // A figure printed beside its limit never reads equal to it or on the wrong side of it (common practice: a
+    // report must not say "0.12 > 0.12"). Expected texts are the values rounded by hand.
+    [Theory]
+    [InlineData(0.12000001234, 0.12, "0.12000001")] // t½ just past a 0.12 s limit: "0.1200" would read 0.12
+    [InlineData(0.0499985557597, 0.05, "0.049999")] // ζ just under 0.05: "0.05000" would read 0.05
+    [InlineData(0.4213, 0.6, "0.4213")] // far from the limit: four digits as usual
+    [InlineData(0.119996, 0.12, "0.119996")] // rounds up onto the limit at 4 and 5 digits
+    public void Against_adds_digits_until_the_figure_reads_apart_from_its_limit(double value, double limit, string expected)
+    {
+        string text = NumberText.Against(value, limit);
+        Assert.Equal(expected, text);
+        Assert.Equal(Math.Sign(value - limit), Math.Sign(double.Parse(text, System.Globalization.CultureInfo.InvariantCulture) - limit));
+    }
+
+    // Swept values stood on by the workbench: seven significant digits (rounded by hand), more only when a tenth of
+    // the step is finer than that.
+    [Theory]
+    [InlineData(66.59291075209914, 2.0, 66.59291)]
+    [InlineData(22.891524873, 0.1, 22.89152)]
+    [InlineData(1000.00012345, 1e-6, 1000.0001235)]
+    [InlineData(4.000000000000001, 0.2, 4.0)]
+    public void Tidy_keeps_seven_digits_unless_the_step_needs_more(double value, double step, double expected)
+    {
+        double tidy = NumberText.Tidy(value, step);
+        Assert.Equal(expected, tidy, 0.0); // exact: the shortest text of the result is the text shown and saved
+        Assert.InRange(Math.Abs(tidy - value), 0.0, step / 10);
+    }
 }

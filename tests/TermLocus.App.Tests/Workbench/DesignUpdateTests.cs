@@ -38,9 +38,66 @@ public class DesignUpdateTests
         var state = Designed();
         var (after, _) = Update.Apply(state, Command.JumpToRecommended);
         double recommended = state.Session!.Design!.Result!.Recommended!.Value;
-        Assert.Equal(StepSeries.Round(recommended, 0.02), after.Session!.Sweep.Value);
+        Assert.Equal(recommended, after.Session!.Sweep.Value, 0.0); // the design's own number, not re-rounded
         Assert.StartsWith($"recommended K = {NumberText.Exact(after.Session.Sweep.Value)} in ", after.Message!.Text, StringComparison.Ordinal);
         Assert.Contains("nearest end", after.Message.Text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void D_gives_the_number_the_design_report_prints_and_the_check_was_run_at()
+    {
+        var state = Designed();
+        var result = state.Session!.Design!.Result!;
+        double recommended = result.Recommended!.Value;
+        // Six significant digits at most, so the shortest spelling is the reported one.
+        Assert.Equal(NumberText.Short(recommended, 6), NumberText.Exact(recommended));
+        var report = TermLocus.App.Reports.DesignReportPresenter.Lines("quadratic.toml", state.Session.Loaded.Plant, result, Glyphs.Ascii);
+        string text = NumberText.Exact(recommended);
+        Assert.Contains(report, l => l.Contains($"recommended: K = {text} A/V", StringComparison.Ordinal));
+        Assert.Contains(report, l => l.Contains($"band check at K = {text} ", StringComparison.Ordinal));
+        Assert.Equal(recommended, result.Recommended.Check.Values["K"], 0.0); // the band check ran at that very number
+
+        var after = Update.Apply(state, Command.JumpToRecommended).State;
+        Assert.Equal($"K = {text} A/V", ParameterPanelPresenter.ValueLine(after.Session!.Sweep));
+        Assert.StartsWith($"recommended K = {text} in ", after.Message!.Text, StringComparison.Ordinal);
+        Assert.EndsWith($"d {text}", DesignBarPresenter.Line(after.Session, 80, Glyphs.Ascii)!.TrimEnd(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void P_and_n_stop_at_the_design_interval_ends_and_say_the_band_fails_beyond()
+    {
+        // The interval ends at K = 4 where the a = 1.6 corner reaches ζ = 0.4 (see Designed); the nominal loop
+        // (a = 2) keeps ζ >= 0.4 up to K = 6.25, its spec boundary, and breaks away from the real axis at K = 1.
+        var (start, _) = Update.Start(null, TestPlants.Folder);
+        var (opened, effects) = Update.Receive(start, new PlantLoaded(BandPlants.Quadratic()));
+        var state = BandPlants.Settle(opened, effects);
+        Assert.NotNull(state.Session!.Locus);
+        Assert.NotNull(state.Session.Design?.Result);
+
+        var limit = BandPlants.Apply(state, Command.JumpToPreviousBoundary);
+        Assert.Equal(4.0, limit.Session!.Sweep.Value, 0.0);
+        Assert.Equal("band limit at K = 4; above it the band misses min_damping", limit.Message!.Text);
+        var next = BandPlants.Apply(limit, Command.JumpToNextBoundary);
+        Assert.Equal(6.25, next.Session!.Sweep.Value, 1e-6);
+        Assert.StartsWith("min_damping boundary at K = 6.25", next.Message!.Text, StringComparison.Ordinal);
+        var back = BandPlants.Apply(next, Command.JumpToPreviousBoundary);
+        Assert.Equal(4.0, back.Session!.Sweep.Value, 0.0);
+        var below = BandPlants.Apply(back, Command.JumpToPreviousBoundary);
+        Assert.Equal(1.0, below.Session!.Sweep.Value, 1e-6);
+    }
+
+    [Fact]
+    public void A_narrow_interval_keeps_an_equals_sign_beside_the_markers()
+    {
+        // The interval [0, 4] on a span of [0, 400]: under one cell, where the recommended value's '|' and the
+        // value's '#' both land; an '=' must still say there is an interval.
+        var session = Designed().Session!;
+        var wide = session.Design! with { Result = session.Design.Result! with { Span = new Interval(0, 400) } };
+        var narrow = session with { Design = wide, Sweep = session.Sweep with { Value = 1 } };
+        string line = DesignBarPresenter.Line(narrow, 80, Glyphs.Ascii)!;
+        string bar = line[(line.IndexOf('[', StringComparison.Ordinal) + 1)..line.IndexOf(']', StringComparison.Ordinal)];
+        Assert.StartsWith("#=", bar, StringComparison.Ordinal);
+        Assert.Equal(1, bar.Count(c => c == '='));
     }
 
     [Fact]

@@ -193,6 +193,22 @@ public sealed class FileEffectWorkerTests : IDisposable
         Assert.Equal(2, Directory.GetFiles(folder).Length);
     }
 
+    [Fact]
+    public void The_recovery_files_record_says_it_is_no_saved_decision_and_a_real_save_writes_the_usual_one()
+    {
+        var loaded = Load();
+        Assert.Null(worker.Perform(new SaveRecoveryEffect(loaded, 9, "v")));
+        var recovered = PlantFileReader.Read(Recovery).OperatingPoints[^1];
+        Assert.Equal("Kp = 9 (recovered, not saved)", recovered.Name);
+        Assert.Equal("recovered after the workbench was ended before saving; not a saved decision", recovered.Note);
+
+        Assert.IsType<OperatingPointSaved>(worker.Perform(new SaveOperatingPointEffect(loaded, 9, "verdict", false, "Kp = 9", SaveOverlay.DefaultNote)));
+        var plant = PlantFileReader.Read(Conveyor);
+        Assert.Equal(SaveOverlay.DefaultNote, plant.OperatingPoints[^1].Note);
+        Assert.Equal("Kp = 9", plant.OperatingPoints[^1].Name);
+        Assert.DoesNotContain(plant.OperatingPoints, p => p.Note == SaveRecoveryEffect.RecordNote);
+    }
+
     private LoadedPlant Load() => Assert.IsType<PlantLoaded>(worker.Perform(new LoadPlantEffect(Conveyor))).Loaded;
 
     private static SaveOperatingPointEffect Save(LoadedPlant loaded, double value) => new(loaded, value, "verdict", false, $"Kp = {value}", "note");

@@ -35,4 +35,26 @@ public class HelpPresenterTests
         Assert.Contains("licensed engineering practice", HelpPresenter.Caution, StringComparison.Ordinal);
         Assert.All(lines, l => Assert.True(TextWidth.Of(l) <= 60, l));
     }
+
+    [Fact]
+    public void Help_names_the_keys_that_need_shift_and_ctrl_as_the_key_table_has_them()
+    {
+        // Read off the key table independently: every capital letter bound is typed with Shift.
+        var capitals = KeyMap.Bindings.Select(b => b.Key).Where(k => k.Special == SpecialKey.None && !k.Ctrl && char.IsUpper(k.Character))
+            .Select(k => k.Character).Distinct().ToList();
+        Assert.Contains('Z', capitals);
+        string heading = HelpPresenter.KeysHeading();
+        Assert.Equal("Keys: capital letters (G H J K L Z) are typed with Shift; Ctrl is only for Ctrl+C; no key needs Alt, and arrows need no modifier", heading);
+        Assert.All(capitals, c => Assert.Contains(c.ToString(), heading, StringComparison.Ordinal));
+        Assert.DoesNotContain("never needed", string.Join('\n', HelpPresenter.Lines(Glyphs.Unicode, 80)), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Wrapping_never_breaks_inside_a_band_point_phrase()
+    {
+        // The save dialog's verdict used to end a line with "(with zh -25" and start the next with "%)"; word by word,
+        // 35 columns do exactly that here.
+        Assert.Equal(["least margin 0.02373 s", "(with zh -25 %)"], HelpPresenter.Wrap("least margin 0.02373 s (with zh -25 %)", 35).ToList());
+        Assert.Equal(["at zh -25 %", "and more"], HelpPresenter.Wrap("at zh -25 % and more", 11).ToList());
+    }
 }

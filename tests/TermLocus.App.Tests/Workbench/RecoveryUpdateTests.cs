@@ -61,6 +61,27 @@ public class RecoveryUpdateTests
     }
 
     [Fact]
+    public void Going_back_after_applying_keeps_the_recovery_file_and_says_so()
+    {
+        var applied = Update.Apply(OpenedWith(Fresh()), Command.ApplyRecovery).State;
+        var (back, effects) = Update.Apply(applied, Command.RevertToSavedValue);
+        Assert.DoesNotContain(effects, e => e is DeleteRecoveryEffect);
+        Assert.Equal(5.0, back.Session!.Sweep.Value);
+        Assert.Equal("back to the saved value K = 5; second.toml.recovery kept for next time", back.Message!.Text);
+    }
+
+    [Fact]
+    public void Saving_an_applied_value_writes_an_ordinary_record_not_the_recovery_one()
+    {
+        var applied = Update.Apply(OpenedWith(Fresh()), Command.ApplyRecovery).State;
+        var dialog = Update.Apply(applied, Command.SaveOperatingPoint).State;
+        Assert.Equal(new SaveOverlay("K = 6.4", SaveOverlay.DefaultNote, NoteField: false), dialog.Overlay);
+        var save = Assert.IsType<SaveOperatingPointEffect>(Assert.Single(Update.Apply(dialog, Command.Confirm).Effects));
+        Assert.Equal("K = 6.4", save.Name);
+        Assert.Equal(SaveOverlay.DefaultNote, save.Note);
+    }
+
+    [Fact]
     public void Saving_a_value_that_did_not_come_from_a_recovery_file_deletes_nothing()
     {
         var unsaved = FilePlants.Unsaved();

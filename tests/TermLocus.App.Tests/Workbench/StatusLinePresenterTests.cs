@@ -52,6 +52,27 @@ public class StatusLinePresenterTests
     }
 
     [Fact]
+    public void A_figure_on_its_limit_gets_the_digits_that_tell_it_from_the_limit()
+    {
+        // A boundary reached with p: t½ a hair over 0.12 s. "0.12 > 0.12" contradicts itself (common practice).
+        var miss = new SpecMiss("max_time_to_half", 0.12, 0.1200000123, -1.23e-8, new Complex(-5.776, 0));
+        Assert.Equal("max_time_to_half: t½ 0.12000001 > 0.12 at -5.776", SpecWording.Violation(miss, Glyphs.Unicode));
+    }
+
+    [Fact]
+    public void A_pole_at_the_origin_is_on_the_stability_boundary_not_unstable()
+    {
+        // K = 0: s² + 2s has roots 0 and -2; a pole at s = 0 neither decays nor grows (marginal; Ogata, Modern
+        // Control Engineering, 5th ed., §5-6; from memory).
+        var state = TestPlants.Opened(TestPlants.SecondOrder(k: 0, specs: Specs.None));
+        Assert.Equal("! marginal: a pole at 0 is on the imaginary axis, the stability boundary",
+            StatusLinePresenter.Verdict(state.Session, Glyphs.Unicode));
+        var table = PoleTablePresenter.Lines(state.Session!.Poles, null, 60, 4, Glyphs.Ascii);
+        Assert.Contains(table, l => l.Contains("marginal", StringComparison.Ordinal));
+        Assert.DoesNotContain(table, l => l.Contains("unstable", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void A_file_without_specs_says_so()
     {
         var state = TestPlants.Opened(TestPlants.SecondOrder(specs: Specs.None));

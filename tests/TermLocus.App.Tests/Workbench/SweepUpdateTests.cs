@@ -111,7 +111,7 @@ public class SweepUpdateTests
         Assert.Equal("min_damping boundary at K = 2.5", previous.Message!.Text);
         var beyond = Update.Apply(next, Command.JumpToNextBoundary).State;
         Assert.Equal(12.0, beyond.Session!.Sweep.Value);
-        Assert.Equal("no spec boundary or crossing above K = 12 in the range", beyond.Message!.Text);
+        Assert.Equal("no spec boundary, crossing or band limit above K = 12 in the range", beyond.Message!.Text);
     }
 
     [Fact]

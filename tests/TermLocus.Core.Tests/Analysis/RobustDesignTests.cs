@@ -88,7 +88,9 @@ public class RobustDesignTests
         double best = MathNet.Numerics.FindMinimum.OfScalarFunctionConstrained(
             kp => -SmallestRelativeMargin(kp, 0.7, 1.0), lower, upper, 1e-10);
         var recommended = Assert.IsType<DesignRecommendation>(result.Recommended);
-        Assert.Equal(best, recommended.Value, 1e-6);
+        // Rounded to RecommendedDigits (6) significant digits: within half a unit of the sixth digit.
+        Assert.Equal(best, recommended.Value, 0.5e-5 * best);
+        Assert.Equal(recommended.Value, double.Parse(recommended.Value.ToString("G6", CultureInfo.InvariantCulture), CultureInfo.InvariantCulture), 0.0);
         Assert.True(recommended.Confirmed);
         // The worst point of the band for both limits is a corner, so the full check agrees with the closed form.
         Assert.Equal(SmallestRelativeMargin(recommended.Value, 0.7, 1.0), recommended.SmallestMargin.RelativeMargin, 1e-9);
