@@ -67,7 +67,9 @@ public static class CheckReportPresenter
         if (!result.StableAcrossBand)
         {
             string where = result.WorstDecayRate is { } w ? " at " + BandWording.Point(result.Box, w.At.Toleranced) : string.Empty;
-            return $"verdict: FAIL {glyphs.Violated} the closed loop is unstable{where}";
+            // A slowest decay rate of exactly 0 is a pole on the boundary (an integrator at zero gain), not a growing one.
+            string what = result.WorstDecayRate is { Value: 0.0 } ? "only marginally stable (a pole on the stability boundary)" : "unstable";
+            return $"verdict: FAIL {glyphs.Violated} the closed loop is {what}{where}";
         }
 
         var violated = result.Violated;

@@ -143,4 +143,15 @@ public class CheckVerbTests
         Assert.False(plant.GetProperty("poles_ill_conditioned").GetBoolean());
         Assert.True(plant.GetProperty("pole_spread").GetDouble() < 1e-9);
     }
+
+    [Fact]
+    public void A_pole_at_the_origin_is_called_marginal_not_unstable()
+    {
+        // K = 0 leaves the open-loop poles 0, -1, -2: the integrator sits on the stability boundary (common practice:
+        // a pole on the imaginary axis is marginally stable, not unstable), and a check still fails it.
+        string file = RepoFiles.TempPlant(ThirdOrderLoop);
+        var (code, text, _) = CliRunner.Run("check", file, "--set", "K=0");
+        Assert.Equal(1, code);
+        Assert.Contains("verdict: FAIL ! the closed loop is only marginally stable", text, StringComparison.Ordinal);
+    }
 }
