@@ -14,8 +14,8 @@ xterm would, so start-up is not held up waiting for replies that never come.
 In tmux at the same size it then measures the floors each step is compared with: the cells whose character or
 colour changed (captured with `tmux capture-pane -e` before and after the step), their bytes alone, and their bytes
 plus one cursor move per run of changed cells; and the bytes tmux received for the step (pipe-pane), as a check.
-With --floor-bin it also runs tests/perf/PollFloor for the idle-CPU floor: the CPU that the idle waits (Terminal.Gui
-2.5's main loop, 25 turns a second; the workbench's input wait, at most 500 ms then 20 ms) cost on their own here.
+With --floor-bin it also runs tests/perf/PollFloor for the idle-CPU floor: the CPU that the idle waits (the main
+loop's turn, at most 250 ms; the input wait, at most 500 ms then 20 ms) cost on their own here.
 
 Prints one line per figure and, with --json FILE, writes them all. Exit 1 when a budget is missed and --strict.
 """

@@ -10,7 +10,7 @@ namespace TermLocus.Tui;
 /// time): holding an arrow key or an editor's burst of writes never queues up stale work.
 /// The recovery file is written in line: the program is about to exit.
 /// </summary>
-internal sealed class BackgroundEffectRunner(IApplication app, EffectWorker worker) : EffectRunner
+internal sealed class BackgroundEffectRunner(Action<Action> post, EffectWorker worker) : EffectRunner
 {
     private readonly object gate = new();
     private readonly Dictionary<Type, Effect> waiting = [];
@@ -72,7 +72,7 @@ internal sealed class BackgroundEffectRunner(IApplication app, EffectWorker work
         var message = worker.Perform(effect);
         if (message is not null)
         {
-            app.Invoke(() => deliver(message));
+            post(() => deliver(message));
         }
     }
 }

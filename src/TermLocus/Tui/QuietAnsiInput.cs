@@ -23,6 +23,7 @@ internal sealed partial class QuietAnsiInput : AnsiInput
     private readonly int wakeFd;
     private readonly PollFd[] watched;
     private int disposed;
+    private bool reading;
 
     public QuietAnsiInput()
     {
@@ -33,11 +34,25 @@ internal sealed partial class QuietAnsiInput : AnsiInput
     /// <summary>True when the kernel gave the wake-up descriptor this input needs.</summary>
     public bool CanWait => wakeFd >= 0;
 
+    /// <summary>
+    /// Called on the input thread once what was waiting has been read into the toolkit's queue (see
+    /// <see cref="MainLoopPacer.Wake"/>); null for none.
+    /// </summary>
+    public Action? InputArrived { get; set; }
+
     public override bool Peek()
     {
         if (base.Peek())
         {
+            // The toolkit reads and queues it next, then asks again: the main loop is told then, below.
+            reading = true;
             return true;
+        }
+
+        if (reading)
+        {
+            reading = false;
+            InputArrived?.Invoke();
         }
 
         if (CanWait && Volatile.Read(ref disposed) == 0)

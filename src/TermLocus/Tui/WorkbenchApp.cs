@@ -89,15 +89,28 @@ public static class WorkbenchApp
         app.Init(DriverRegistry.Names.ANSI);
         TerminalSetup.Configure(app, noMouse);
 
-        var controller = new WorkbenchController(state, new BackgroundEffectRunner(app, worker), () => app.RequestStop());
+        // Event-paced main loop only with the quiet input: it is what tells the loop that a key came.
+        using var pacer = quietInput is null ? null : new MainLoopPacer(app);
+        if (quietInput is not null)
+        {
+            quietInput.InputArrived = pacer!.Wake;
+        }
+
+        void Post(Action action)
+        {
+            app.Invoke(action);
+            pacer?.Wake();
+        }
+
+        var controller = new WorkbenchController(state, new BackgroundEffectRunner(Post, worker), () => app.RequestStop());
         using var screen = new WorkbenchScreen(controller, Palette.For(colour), symbols);
         KeyRouter.Install(app, controller, screen);
-        using var watch = new PlantFileWatch(controller, action => app.Invoke(action));
+        using var watch = new PlantFileWatch(controller, Post);
         using var signals = new SignalGuard(
             stop: code =>
             {
                 exitCode = code;
-                app.Invoke(controller.EmergencyExit);
+                Post(controller.EmergencyExit);
             },
             hangUp: () => _ = WriteRecovery(controller.State, worker));
         controller.Start(effects);
