@@ -33,7 +33,7 @@ public class ResponseBenchmarks
         var num = Polynomial.FromAscending(1, 0.1) * den[0];
         loop = new RationalFunction(num, den);
 
-        // The same sections as a plant of degree 10 (unit DC gain) held every 10 ms (|p|·T up to 0.9) under a
+        // The same sections as a plant of degree 10 (unit steady-state gain) held every 10 ms (|p|·T up to 0.9) under a
         // proportional gain of 0.5.
         plant = new RationalFunction(Polynomial.Constant(den[0]), den);
         controller = RationalFunction.Constant(0.5);

@@ -28,6 +28,16 @@ internal static class CommonOptions
         return option;
     }
 
+    /// <summary>--from: the start of the swept span (default: the file's range, else the automatic span).</summary>
+    public static Option<double?> From() => new("--from") { Description = "Start of the swept span (default: the file's range)" };
+
+    /// <summary>--to: the end of the swept span.</summary>
+    public static Option<double?> To() => new("--to") { Description = "End of the swept span" };
+
+    /// <summary>The plant named by <paramref name="file"/> with the <paramref name="set"/> overrides (see <see cref="PlantInput.Load"/>).</summary>
+    public static PlantInput LoadPlant(ParseResult result, Argument<string> file, Option<string[]> set) =>
+        PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
+
     /// <summary>A required plant-file argument.</summary>
     public static Argument<string> File() => new("FILE") { Description = "A plant file (.toml)" };
 }

@@ -24,7 +24,7 @@ public class SampledLocusFactsTests
     {
         // Controller K·z/(z − 1) before the held 1/(s + 1): stable for 0 < K < 8.165 (T = 0.5 s), 4.328 (T = 1 s) and
         // 2.626 (T = 2 s), a branch leaving through z = −1 (NPTEL course 108103008, Digital Control, IIT Guwahati,
-        // Module 5, Lecture 1, "Root locus diagram of digital control systems", read). By hand: with a = e^{−T},
+        // module 5, "Root locus diagram of digital control systems", read). By hand: with a = e^{−T},
         // P = z² + (K(1 − a) − 1 − a)z + a; a₀ = a &lt; 1 always, so the limit is P(−1) = 2(1 + a) − K(1 − a) = 0,
         // K = 2(1 + a)/(1 − a) = 2·coth(T/2).
         var model = Sampled([("K", 1.0)], "1/(s+1)", t, controller: "K*z/(z - 1)");

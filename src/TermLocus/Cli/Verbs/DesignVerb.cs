@@ -18,15 +18,15 @@ internal sealed class DesignVerb : IVerb
         var file = CommonOptions.File();
         var json = CommonOptions.Json();
         var set = CommonOptions.Set();
-        var from = new Option<double?>("--from") { Description = "Start of the swept span (default: the file's range)" };
-        var to = new Option<double?>("--to") { Description = "End of the swept span" };
+        var from = CommonOptions.From();
+        var to = CommonOptions.To();
         var command = new Command("design", "Intervals of the swept parameter that meet every spec at every band corner, and a recommended value")
         {
             file, json, set, from, to,
         };
         command.SetAction(result =>
         {
-            var input = PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
+            var input = CommonOptions.LoadPlant(result, file, set);
             var design = RobustDesign.Find(input.Model, input.Values, LocusInput.Span(input, result.GetValue(from), result.GetValue(to)));
             if (result.GetValue(json))
             {

@@ -22,7 +22,7 @@ internal sealed class PlotVerb : IVerb
         {
             var (columns, rows) = ParseSize(result.GetValue(size) ?? "80x24");
             var chosen = SymbolChoice.Detect(context.Environment, result.GetValue(symbols));
-            var input = PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
+            var input = CommonOptions.LoadPlant(result, file, set);
             var study = LocusInput.Study(input, null, null);
             var check = LoopCheck.Run(input.Model, input.Values);
             var current = LocusTracer.PolesAt(input.Model.Family(input.Plant.Loop.Sweep, input.Values), input.Values[input.Plant.Loop.Sweep]);

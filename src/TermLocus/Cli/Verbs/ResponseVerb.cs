@@ -29,7 +29,7 @@ internal sealed class ResponseVerb : IVerb
         };
         command.SetAction(result =>
         {
-            var input = PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
+            var input = CommonOptions.LoadPlant(result, file, set);
             var response = LoopResponse.Analyse(input.Model, input.Values);
             if (!response.IsAvailable)
             {

@@ -15,8 +15,8 @@ internal sealed class TraceVerb : IVerb
         var csv = new Option<bool>("--csv") { Description = "Comma-separated rows with a header" };
         var json = CommonOptions.Json();
         var points = new Option<int?>("--points") { Description = "Most swept values sampled (default 4000; adaptive below that)" };
-        var from = new Option<double?>("--from") { Description = "Start of the swept span" };
-        var to = new Option<double?>("--to") { Description = "End of the swept span" };
+        var from = CommonOptions.From();
+        var to = CommonOptions.To();
         var set = CommonOptions.Set();
         var command = new Command("trace", "The locus branches as rows: value, branch, re, im") { file, csv, json, points, from, to, set };
         command.SetAction(result =>
@@ -37,7 +37,7 @@ internal sealed class TraceVerb : IVerb
                 options = options with { MaxValues = n };
             }
 
-            var input = PlantInput.Load(result.GetValue(file)!, ValueOverrides.Parse(result.GetValue(set) ?? []));
+            var input = CommonOptions.LoadPlant(result, file, set);
             var study = LocusInput.Study(input, result.GetValue(from), result.GetValue(to), options);
             Write(context, study.Trace, result.GetValue(csv), result.GetValue(json), input);
             return ExitCodes.Ok;
