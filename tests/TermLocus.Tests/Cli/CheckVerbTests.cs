@@ -6,16 +6,7 @@ public class CheckVerbTests
 {
     // Ogata, Modern Control Engineering, 5th ed., Example 6-1 (from memory): K/(s(s+1)(s+2)) with unity negative
     // feedback has closed-loop poles at ±j√2 and -3 when K = 6 (the imaginary-axis crossing).
-    private const string ThirdOrderLoop = """
-        title = "third-order textbook loop"
-        [parameters]
-        K = { value = 6.0, range = [0.0, 20.0] }
-        [loop]
-        plant = "K / (s*(s + 1)*(s + 2))"
-        sweep = "K"
-        [specs]
-        min_damping = 0.2
-        """;
+    private static readonly string ThirdOrderLoop = TextbookLoops.ThirdOrder("third-order textbook loop", "min_damping = 0.2", k: 6.0);
 
     [Fact]
     public void The_bundled_library_reports_and_exits_1_because_one_demo_fails_by_design()

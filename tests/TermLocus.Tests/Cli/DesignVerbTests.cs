@@ -10,41 +10,15 @@ public class DesignVerbTests
     // at -a ± j a√3 and the third pole at -b, (s^2 + 2as + 4a^2)(s + b) = s^3 + 3s^2 + 2s + K gives 2a + b = 3,
     // 4a^2 + 2ab = 2, so a = 1/3, b = 7/3 and K = 4a^2 b = 28/27 = 1.037037. Below the breakaway (K = 0.3849) all
     // poles are real (ζ = 1); at K = 0 one sits at the origin. So ζ >= 0.5 holds for 0 < K <= 28/27.
-    private const string OgataLoop = """
-        title = "third-order textbook loop"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 20.0] }
-        [loop]
-        plant = "K / (s*(s + 1)*(s + 2))"
-        sweep = "K"
-        [specs]
-        min_damping = 0.5
-        """;
+    private static readonly string OgataLoop = TextbookLoops.ThirdOrder("third-order textbook loop", "min_damping = 0.5");
 
     // Same loop with a decay rate no gain reaches: P = s^3 + 3s^2 + 2s + K, so the decay rates of the three poles sum
     // to 3 for every K (sum of roots = -a2/a3; common practice), and all three cannot reach 1.5 (sum 4.5).
-    private const string Infeasible = """
-        title = "no feasible gain"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 20.0] }
-        [loop]
-        plant = "K / (s*(s + 1)*(s + 2))"
-        sweep = "K"
-        [specs]
-        min_decay_rate = 1.5
-        """;
+    private static readonly string Infeasible = TextbookLoops.ThirdOrder("no feasible gain", "min_decay_rate = 1.5");
 
     // Ogata, Discrete-Time Control Systems, 2nd ed., ch. 4 (from memory): K/(s(s+1)) behind a zero-order hold with
     // T = 1 s is stable for 0 < K < (e-1)/(e-2) ≈ 2.3922 (Jury test).
-    private const string SampledLoop = """
-        title = "sampled textbook loop"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 4.0] }
-        [loop]
-        plant = "K / (s*(s + 1))"
-        sample_time = 1.0
-        sweep = "K"
-        """;
+    private static readonly string SampledLoop = TextbookLoops.SampledTypeOne("sampled textbook loop");
 
     [Fact]
     public void Json_gives_the_textbook_damping_limit_as_the_solved_upper_end()

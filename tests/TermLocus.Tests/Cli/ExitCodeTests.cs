@@ -11,27 +11,9 @@ public class ExitCodeTests
 {
     // K/(s(s + 1)(s + 2)) is stable for 0 < K < 6 (Ogata, Modern Control Engineering, 5th ed., Example 6-1, from
     // memory); at K = 1 the dominant pair is −0.3376 ± j0.5623 (ζ ≈ 0.515), so min_damping 0.9 is missed.
-    private const string MissesDamping = """
-        title = "third-order loop missing its damping spec"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 20.0] }
-        [loop]
-        plant = "K / (s*(s + 1)*(s + 2))"
-        sweep = "K"
-        [specs]
-        min_damping = 0.9
-        """;
+    private static readonly string MissesDamping = TextbookLoops.ThirdOrder("third-order loop missing its damping spec", "min_damping = 0.9");
 
-    private const string MeetsDamping = """
-        title = "third-order loop meeting its damping spec"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 20.0] }
-        [loop]
-        plant = "K / (s*(s + 1)*(s + 2))"
-        sweep = "K"
-        [specs]
-        min_damping = 0.4
-        """;
+    private static readonly string MeetsDamping = TextbookLoops.ThirdOrder("third-order loop meeting its damping spec", "min_damping = 0.4");
 
     [Theory]
     [InlineData("check", 1)]

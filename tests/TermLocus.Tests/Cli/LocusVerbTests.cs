@@ -7,28 +7,11 @@ public class LocusVerbTests
     // Ogata, Modern Control Engineering, 5th ed., Example 6-1 (from memory): G = K/(s(s+1)(s+2)).
     // Asymptotes: centroid -1, angles ±60° and 180°; breakaway at s = -0.4226 with K = 0.3849;
     // imaginary-axis crossing at ω = √2 with K = 6; stable for 0 < K < 6.
-    private const string OgataLoop = """
-        title = "third-order textbook loop"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 20.0] }
-        [loop]
-        plant = "K / (s*(s + 1)*(s + 2))"
-        sweep = "K"
-        [specs]
-        min_damping = 0.5
-        """;
+    private static readonly string OgataLoop = TextbookLoops.ThirdOrder("third-order textbook loop", "min_damping = 0.5");
 
     // Ogata, Discrete-Time Control Systems, 2nd ed., ch. 4 (from memory): K/(s(s+1)) behind a zero-order hold with
     // T = 1 s is stable for 0 < K < (e-1)/(e-2) ≈ 2.3922 (Jury test on z^2 + (0.3679K - 1.3679)z + 0.3679 + 0.2642K).
-    private const string SampledLoop = """
-        title = "sampled textbook loop"
-        [parameters]
-        K = { value = 1.0, range = [0.0, 4.0] }
-        [loop]
-        plant = "K / (s*(s + 1))"
-        sample_time = 1.0
-        sweep = "K"
-        """;
+    private static readonly string SampledLoop = TextbookLoops.SampledTypeOne("sampled textbook loop");
 
     [Fact]
     public void Analyze_json_gives_the_textbook_construction_facts()
